@@ -1,0 +1,38 @@
+import express from 'express';
+import type { AppDependencies } from './app-dependencies';
+import { accessGuard } from './auth/access-guard';
+import { authRouter, sessionRouter } from './auth/auth-router';
+import { requireCsrfToken } from './auth/csrf';
+import { loadActor } from './auth/load-actor';
+import './auth/session-data';
+import { healthRouter } from './health/health-router';
+import { apiNotFound, errorHandler } from './http/error-handler';
+import { securityHeaders } from './http/security-headers';
+import { sessionMiddleware } from './http/session-middleware';
+import { staticApp } from './http/static-app';
+import { membersRouter } from './members/members-router';
+
+/** Builds the whole app without listening, so tests drive it through supertest. */
+export function createApp(deps: AppDependencies) {
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(securityHeaders(deps.config));
+  app.use(sessionMiddleware(deps.config, deps.db));
+
+  app.use('/auth', express.urlencoded({ extended: false, limit: '4kb' }), authRouter(deps));
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(loadActor(deps.db));
+  api.use(accessGuard);
+  api.use(requireCsrfToken);
+  api.use(healthRouter(deps));
+  api.use(sessionRouter());
+  api.use(membersRouter(deps));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (deps.config.STATIC_DIR) app.use(staticApp(deps.config.STATIC_DIR));
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,5 @@
+import type { AccessRule } from './access-rule';
+
+export const authAccess: readonly AccessRule[] = [
+  { method: 'GET', path: '/api/session', access: 'signed-in' },
+];

@@ -1,0 +1,5 @@
+import type { AccessRule } from '../auth/access-rule';
+
+export const healthAccess: readonly AccessRule[] = [
+  { method: 'GET', path: '/api/health', access: 'public' },
+];

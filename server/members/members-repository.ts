@@ -1,0 +1,51 @@
+import { and, asc, eq } from 'drizzle-orm';
+import type { Member } from '@shared/members/member';
+import type { Role } from '@shared/auth/role';
+import type { Database } from '../db/database';
+import { memberships, users } from '../db/schema';
+import { HttpError, notFound } from '../http/http-error';
+
+export async function listMembers(db: Database, organisationId: string): Promise<Member[]> {
+  const rows = await db
+    .select({
+      userId: users.id,
+      email: users.email,
+      name: users.name,
+      roles: memberships.roles,
+      joinedAt: memberships.createdAt,
+    })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(eq(memberships.organisationId, organisationId))
+    .orderBy(asc(users.name));
+  return rows.map((row) => ({ ...row, joinedAt: row.joinedAt.toISOString() }));
+}
+
+/**
+ * Replaces a member's roles. The organisation must keep at least one admin, or nobody could
+ * manage it any more; the check and the update share one transaction with the rows locked.
+ */
+export async function setMemberRoles(
+  db: Database,
+  organisationId: string,
+  userId: string,
+  roles: Role[],
+): Promise<void> {
+  await db.transaction(async (tx) => {
+    const locked = await tx
+      .select({ userId: memberships.userId, roles: memberships.roles })
+      .from(memberships)
+      .where(eq(memberships.organisationId, organisationId))
+      .for('update');
+    const target = locked.find((row) => row.userId === userId);
+    if (!target) throw notFound('That member');
+    const otherAdmins = locked.filter((row) => row.userId !== userId && row.roles.includes('admin'));
+    if (!roles.includes('admin') && otherAdmins.length === 0) {
+      throw new HttpError(409, 'last-admin', 'The organisation must keep at least one administrator.');
+    }
+    await tx
+      .update(memberships)
+      .set({ roles })
+      .where(and(eq(memberships.organisationId, organisationId), eq(memberships.userId, userId)));
+  });
+}
