@@ -5,7 +5,11 @@ import { healthAccess } from '../health/health-access';
 import { membersAccess } from '../members/members-access';
 
 /** Every API route with who may call it. A route missing here is refused, never open. */
-export const accessPolicy: readonly AccessRule[] = [...authAccess, ...healthAccess, ...membersAccess];
+export const accessPolicy: readonly AccessRule[] = [
+  ...authAccess,
+  ...healthAccess,
+  ...membersAccess,
+];
 
 const matchers = accessPolicy.map((rule) => ({
   rule,

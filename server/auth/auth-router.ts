@@ -17,7 +17,9 @@ const returnToSchema = z
   .catch('/');
 
 function regenerate(req: Request): Promise<void> {
-  return new Promise((resolve, reject) => req.session.regenerate((e) => (e ? reject(e) : resolve())));
+  return new Promise((resolve, reject) =>
+    req.session.regenerate((e) => (e ? reject(e) : resolve())),
+  );
 }
 
 /** Browser-facing sign-in, callback, invitation links and sign-out. */
@@ -39,7 +41,14 @@ export function authRouter({ db, identity }: AppDependencies): Router {
   router.get('/invitation/:token', async (req, res) => {
     const invitation = await findOpenInvitation(db, hashInvitationToken(req.params.token));
     if (!invitation) {
-      res.status(410).send(signInProblemPage('This invitation cannot be used', 'It has already been accepted or it has expired. Ask your administrator to send a new one.'));
+      res
+        .status(410)
+        .send(
+          signInProblemPage(
+            'This invitation cannot be used',
+            'It has already been accepted or it has expired. Ask your administrator to send a new one.',
+          ),
+        );
       return;
     }
     await regenerate(req);
@@ -53,7 +62,14 @@ export function authRouter({ db, identity }: AppDependencies): Router {
     const pending = req.session.pendingSignIn;
     const invitationToken = req.session.invitationToken;
     if (!pending) {
-      res.status(400).send(signInProblemPage('This sign-in has expired', 'The answer from the sign-in service was already used or belongs to another browser window. Please sign in again.'));
+      res
+        .status(400)
+        .send(
+          signInProblemPage(
+            'This sign-in has expired',
+            'The answer from the sign-in service was already used or belongs to another browser window. Please sign in again.',
+          ),
+        );
       return;
     }
     delete req.session.pendingSignIn;
@@ -62,7 +78,14 @@ export function authRouter({ db, identity }: AppDependencies): Router {
       who = await identity.completeSignIn(new URL(req.originalUrl, identity.redirectUri), pending);
     } catch (error) {
       const reason = error instanceof Error ? error.message : String(error);
-      res.status(400).send(signInProblemPage('Sign-in could not be completed', `The sign-in service's answer was refused (${reason}). Please sign in again.`));
+      res
+        .status(400)
+        .send(
+          signInProblemPage(
+            'Sign-in could not be completed',
+            `The sign-in service's answer was refused (${reason}). Please sign in again.`,
+          ),
+        );
       return;
     }
     const outcome = await resolveSignIn(db, who, invitationToken);

@@ -27,7 +27,11 @@ export const requireCsrfToken: RequestHandler = (req, _res, next) => {
     sent.length === expected.length &&
     timingSafeEqual(Buffer.from(sent), Buffer.from(expected));
   if (!ok) {
-    throw new HttpError(403, 'csrf-token-invalid', 'The request lacks a valid CSRF token; reload the page and try again.');
+    throw new HttpError(
+      403,
+      'csrf-token-invalid',
+      'The request lacks a valid CSRF token; reload the page and try again.',
+    );
   }
   next();
 };

@@ -28,7 +28,10 @@ export class IdentityProvider {
     return new URL('/auth/callback', this.config.APP_URL).href;
   }
 
-  async authorizationUrl(pending: { state: string; nonce: string; codeVerifier: string }, loginHint?: string) {
+  async authorizationUrl(
+    pending: { state: string; nonce: string; codeVerifier: string },
+    loginHint?: string,
+  ) {
     const configuration = await this.discover();
     const parameters: Record<string, string> = {
       redirect_uri: this.redirectUri,
@@ -45,7 +48,10 @@ export class IdentityProvider {
   }
 
   /** Exchanges the callback's code; throws when state, nonce or PKCE do not match. */
-  async completeSignIn(callbackUrl: URL, pending: { state: string; nonce: string; codeVerifier: string }) {
+  async completeSignIn(
+    callbackUrl: URL,
+    pending: { state: string; nonce: string; codeVerifier: string },
+  ) {
     const configuration = await this.discover();
     const tokens = await oidc.authorizationCodeGrant(configuration, callbackUrl, {
       pkceCodeVerifier: pending.codeVerifier,

@@ -21,7 +21,12 @@ export type SignInOutcome =
 async function upsertUser(tx: Executor, who: VerifiedIdentity) {
   const [user] = await tx
     .insert(users)
-    .values({ email: who.email, name: who.name || who.email, identityIssuer: who.issuer, identitySubject: who.subject })
+    .values({
+      email: who.email,
+      name: who.name || who.email,
+      identityIssuer: who.issuer,
+      identitySubject: who.subject,
+    })
     .onConflictDoUpdate({
       target: users.email,
       set: {
@@ -30,7 +35,7 @@ async function upsertUser(tx: Executor, who: VerifiedIdentity) {
       },
     })
     .returning({ id: users.id });
-  return user!.id;
+  return user.id;
 }
 
 /**
@@ -56,30 +61,38 @@ export async function resolveSignIn(
         .values({ organisationId: invitation.organisationId, userId, roles: invitation.roles })
         .onConflictDoUpdate({
           target: [memberships.organisationId, memberships.userId],
-          set: { roles: sql`array(select distinct unnest(${memberships.roles} || excluded.roles))` },
+          set: {
+            roles: sql`array(select distinct unnest(${memberships.roles} || excluded.roles))`,
+          },
         });
-      await tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, invitation.id));
+      await tx
+        .update(invitations)
+        .set({ acceptedAt: new Date() })
+        .where(eq(invitations.id, invitation.id));
       return { kind: 'member', userId, organisationId: invitation.organisationId };
     }
     const [known] = await tx
       .select({ userId: users.id, organisationId: memberships.organisationId })
       .from(users)
       .innerJoin(memberships, eq(memberships.userId, users.id))
-      .where(
-        and(eq(users.identityIssuer, who.issuer), eq(users.identitySubject, who.subject)),
-      )
+      .where(and(eq(users.identityIssuer, who.issuer), eq(users.identitySubject, who.subject)))
       .orderBy(asc(memberships.createdAt))
       .limit(1);
     if (known) return { kind: 'member', ...known };
     // Seeded or pre-created users have an e-mail but no subject until their first sign-in.
     const [byEmail] = await tx
-      .select({ userId: users.id, organisationId: memberships.organisationId, subject: users.identitySubject })
+      .select({
+        userId: users.id,
+        organisationId: memberships.organisationId,
+        subject: users.identitySubject,
+      })
       .from(users)
       .innerJoin(memberships, eq(memberships.userId, users.id))
       .where(eq(users.email, who.email))
       .orderBy(asc(memberships.createdAt))
       .limit(1);
-    if (!byEmail || (byEmail.subject && byEmail.subject !== who.subject)) return { kind: 'no-access' };
+    if (!byEmail || (byEmail.subject && byEmail.subject !== who.subject))
+      return { kind: 'no-access' };
     await upsertUser(tx, who);
     return { kind: 'member', userId: byEmail.userId, organisationId: byEmail.organisationId };
   });

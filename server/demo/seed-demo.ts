@@ -26,7 +26,7 @@ export async function seedDemo(db: Database): Promise<void> {
         .returning({ id: users.id });
       await tx
         .insert(memberships)
-        .values({ organisationId: organisation!.id, userId: user!.id, roles: person.roles });
+        .values({ organisationId: organisation.id, userId: user.id, roles: person.roles });
     }
   });
 }

@@ -24,7 +24,10 @@ export const errorHandler: ErrorRequestHandler = (error: unknown, req, res, next
   }
   if (isBodyParserError(error)) {
     res.status(error.status).json({
-      error: { code: 'malformed-body', message: `The request body could not be read: ${error.message}` },
+      error: {
+        code: 'malformed-body',
+        message: `The request body could not be read: ${error.message}`,
+      },
     } satisfies ApiError);
     return;
   }

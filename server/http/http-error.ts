@@ -13,8 +13,7 @@ export class HttpError extends Error {
   }
 }
 
-export const notSignedIn = () =>
-  new HttpError(401, 'not-signed-in', 'Sign in to continue.');
+export const notSignedIn = () => new HttpError(401, 'not-signed-in', 'Sign in to continue.');
 
 export const forbidden = (message = 'Your role does not allow this.') =>
   new HttpError(403, 'forbidden', message);

@@ -3,7 +3,13 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 
 /** Files the service worker checks for updates: never cached by the browser's HTTP cache. */
-const alwaysFresh = new Set(['/index.html', '/ngsw.json', '/ngsw-worker.js', '/safety-worker.js', '/manifest.webmanifest']);
+const alwaysFresh = new Set([
+  '/index.html',
+  '/ngsw.json',
+  '/ngsw-worker.js',
+  '/safety-worker.js',
+  '/manifest.webmanifest',
+]);
 
 /** Serves the built Angular app; unknown paths get index.html so client-side routes deep-link. */
 export function staticApp(dir: string): Router {
@@ -19,7 +25,11 @@ export function staticApp(dir: string): Router {
         const name = path.slice(dir.length);
         res.setHeader(
           'Cache-Control',
-          alwaysFresh.has(name) ? 'no-cache' : /-[A-Z0-9]{8}\./.test(name) ? 'public, max-age=31536000, immutable' : 'public, max-age=3600',
+          alwaysFresh.has(name)
+            ? 'no-cache'
+            : /-[A-Z0-9]{8}\./.test(name)
+              ? 'public, max-age=31536000, immutable'
+              : 'public, max-age=3600',
         );
       },
     }),

@@ -5,7 +5,11 @@ import { HttpError } from './http-error';
  * Parses request input with a shared zod schema; on failure answers 400 listing every field and
  * what is wrong with it, so the client can show each message beside its field.
  */
-export function validate<T extends z.ZodType>(schema: T, input: unknown, where = 'body'): z.infer<T> {
+export function validate<T extends z.ZodType>(
+  schema: T,
+  input: unknown,
+  where = 'body',
+): z.infer<T> {
   const parsed = schema.safeParse(input);
   if (parsed.success) return parsed.data;
   const issues = parsed.error.issues.map((issue) => ({

@@ -47,7 +47,7 @@ export async function createInvitation(
       expiresAt: new Date(Date.now() + invitationLifetimeMs),
     })
     .returning();
-  return { invitation: toInvitation(row!), token };
+  return { invitation: toInvitation(row), token };
 }
 
 /** A pending, unexpired invitation for the token's hash, or undefined. */

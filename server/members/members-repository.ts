@@ -39,9 +39,15 @@ export async function setMemberRoles(
       .for('update');
     const target = locked.find((row) => row.userId === userId);
     if (!target) throw notFound('That member');
-    const otherAdmins = locked.filter((row) => row.userId !== userId && row.roles.includes('admin'));
+    const otherAdmins = locked.filter(
+      (row) => row.userId !== userId && row.roles.includes('admin'),
+    );
     if (!roles.includes('admin') && otherAdmins.length === 0) {
-      throw new HttpError(409, 'last-admin', 'The organisation must keep at least one administrator.');
+      throw new HttpError(
+        409,
+        'last-admin',
+        'The organisation must keep at least one administrator.',
+      );
     }
     await tx
       .update(memberships)

@@ -43,12 +43,12 @@ export function membersRouter({ db, mailer, config }: AppDependencies): Router {
         .from(organisations)
         .where(eq(organisations.id, actor.organisationId));
       await mailer.send(
-      invitationMail({
-        to: request.email,
-        name: request.name,
-        inviterName: actor.name,
-        organisationName: organisation?.name ?? 'your organisation',
-        roles: request.roles,
+        invitationMail({
+          to: request.email,
+          name: request.name,
+          inviterName: actor.name,
+          organisationName: organisation?.name ?? 'your organisation',
+          roles: request.roles,
           link: new URL(`/auth/invitation/${created.token}`, config.APP_URL).href,
         }),
       );

@@ -4,7 +4,16 @@ import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from '
 import { join, relative } from 'node:path';
 import { checkoutRoot } from './state-dir';
 
-const inputs = ['src', 'shared', 'public', 'angular.json', 'ngsw-config.json', 'package-lock.json', 'tsconfig.json', 'tsconfig.app.json'];
+const inputs = [
+  'src',
+  'shared',
+  'public',
+  'angular.json',
+  'ngsw-config.json',
+  'package-lock.json',
+  'tsconfig.json',
+  'tsconfig.app.json',
+];
 export const builtAppDir = join(checkoutRoot, 'dist', 'fieldcurve', 'browser');
 const stampFile = join(checkoutRoot, 'dist', '.fieldcurve-build-stamp');
 
@@ -28,16 +37,24 @@ function fingerprint(): string {
 /** Builds the production app unless the sources are unchanged since the last build. */
 export function buildAppIfStale(log: (line: string) => void): void {
   const current = fingerprint();
-  if (existsSync(stampFile) && existsSync(join(builtAppDir, 'index.html')) && readFileSync(stampFile, 'utf8') === current) {
+  if (
+    existsSync(stampFile) &&
+    existsSync(join(builtAppDir, 'index.html')) &&
+    readFileSync(stampFile, 'utf8') === current
+  ) {
     log('app build is up to date');
     return;
   }
   log('building the app (production)…');
-  const result = spawnSync(join(checkoutRoot, 'node_modules', '.bin', 'ng'), ['build', '--configuration', 'production'], {
-    cwd: checkoutRoot,
-    stdio: 'inherit',
-    env: { ...process.env, NG_CLI_ANALYTICS: 'false' },
-  });
+  const result = spawnSync(
+    join(checkoutRoot, 'node_modules', '.bin', 'ng'),
+    ['build', '--configuration', 'production'],
+    {
+      cwd: checkoutRoot,
+      stdio: 'inherit',
+      env: { ...process.env, NG_CLI_ANALYTICS: 'false' },
+    },
+  );
   if (result.status !== 0) throw new Error('the app build failed (see the output above)');
   writeFileSync(stampFile, current);
 }

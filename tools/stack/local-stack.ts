@@ -30,32 +30,52 @@ function localSecret(dir: string): string {
 }
 
 /** Starts PostgreSQL and the stand-ins; each step says what failed if it cannot start. */
-export async function startLocalStack(dir: string, ports: StackPorts, database: string): Promise<LocalStack> {
+export async function startLocalStack(
+  dir: string,
+  ports: StackPorts,
+  database: string,
+  freshDatabase = false,
+): Promise<LocalStack> {
   const stoppers: (() => Promise<void> | void)[] = [];
   const stop = async () => {
-    for (const stopOne of stoppers.reverse()) await Promise.resolve(stopOne()).catch(() => undefined);
+    for (const stopOne of stoppers.reverse())
+      await Promise.resolve(stopOne()).catch(() => undefined);
   };
   const step = async <T>(name: string, start: () => Promise<T>): Promise<T> => {
     try {
       return await start();
     } catch (error) {
       await stop();
-      throw new Error(`${name} could not start: ${error instanceof Error ? error.message : String(error)}`);
+      throw new Error(
+        `${name} could not start: ${error instanceof Error ? error.message : String(error)}`,
+      );
     }
   };
   const appUrl = `http://127.0.0.1:${ports.app}`;
   const clientSecret = 'local-client-secret';
-  const postgres = await step('PostgreSQL', () => startPostgres({ dir, port: ports.postgres, database }));
+  const postgres = await step('PostgreSQL', () =>
+    startPostgres({ dir, port: ports.postgres, database, fresh: freshDatabase }),
+  );
   stoppers.push(() => postgres.stop());
   const mail = await step('The mail sink', () => startMailSink(ports.smtp, ports.mailInbox));
   stoppers.push(() => mail.stop());
-  const store = await step('The object store (s3rver)', () => startObjectStore(dir, ports.objectStore));
+  const store = await step('The object store (s3rver)', () =>
+    startObjectStore(dir, ports.objectStore),
+  );
   stoppers.push(() => store.stop());
-  const accounts = demoPeople.map((p) => ({ email: p.email, name: p.name, password: demoPassword }));
+  const accounts = demoPeople.map((p) => ({
+    email: p.email,
+    name: p.name,
+    password: demoPassword,
+  }));
   const idp = await step('The identity provider', () =>
     startIdentityProvider({
-      dir, port: ports.identityProvider, clientId: 'fieldcurve-web', clientSecret,
-      redirectUris: [`${appUrl}/auth/callback`], accounts,
+      dir,
+      port: ports.identityProvider,
+      clientId: 'fieldcurve-web',
+      clientSecret,
+      redirectUris: [`${appUrl}/auth/callback`],
+      accounts,
     }),
   );
   stoppers.push(() => idp.stop());

@@ -8,6 +8,8 @@ export interface ClusterOptions {
   dir: string;
   port: number;
   database: string;
+  /** Drop and recreate the database (the test run starts from an empty one). */
+  fresh?: boolean;
 }
 
 export interface RunningCluster {
@@ -37,8 +39,16 @@ function initialise(dataDir: string, parent: string): void {
   const { uid, gid } = postgresUid();
   chownSync(pwFile, uid, gid);
   const init = asPostgres('initdb', [
-    '-D', dataDir, '-U', 'postgres', `--pwfile=${pwFile}`,
-    '--auth-local=trust', '--auth-host=scram-sha-256', '-E', 'UTF8', '--locale=C.UTF-8',
+    '-D',
+    dataDir,
+    '-U',
+    'postgres',
+    `--pwfile=${pwFile}`,
+    '--auth-local=trust',
+    '--auth-host=scram-sha-256',
+    '-E',
+    'UTF8',
+    '--locale=C.UTF-8',
   ]);
   rmSync(pwFile, { force: true });
   if (init.status !== 0) throw new Error(`initdb failed:\n${init.output}`);
@@ -56,8 +66,20 @@ async function waitUntilReady(socketDir: string, port: number): Promise<void> {
 function psql(socketDir: string, port: number, sql: string): string {
   const result = spawnSync(
     'runuser',
-    ['-u', 'postgres', '--', join(binDir, 'psql'), '-h', socketDir, '-p', String(port),
-      '-d', 'postgres', '-tAc', sql],
+    [
+      '-u',
+      'postgres',
+      '--',
+      join(binDir, 'psql'),
+      '-h',
+      socketDir,
+      '-p',
+      String(port),
+      '-d',
+      'postgres',
+      '-tAc',
+      sql,
+    ],
     { encoding: 'utf8' },
   );
   if (result.status !== 0) throw new Error(`psql failed: ${result.stderr}`);
@@ -88,21 +110,48 @@ export async function startPostgres(options: ClusterOptions): Promise<RunningClu
   // A cluster left running by an earlier run (or a crash) is stopped first so the port is ours.
   asPostgres('pg_ctl', ['-D', dataDir, 'stop', '-m', 'fast']);
   const settings = [
-    `-c listen_addresses=127.0.0.1`, `-p ${options.port}`, `-k ${socketDir}`,
-    '-c max_connections=200', '-c shared_buffers=256MB', '-c fsync=on',
+    `-c listen_addresses=127.0.0.1`,
+    `-p ${options.port}`,
+    `-k ${socketDir}`,
+    '-c max_connections=200',
+    '-c shared_buffers=256MB',
+    '-c fsync=on',
   ].join(' ');
   const started = asPostgres('pg_ctl', [
-    '-D', dataDir, '-l', logFile, '-o', settings, '-w', '-t', '30', 'start',
+    '-D',
+    dataDir,
+    '-l',
+    logFile,
+    '-o',
+    settings,
+    '-w',
+    '-t',
+    '30',
+    'start',
   ]);
   if (started.status !== 0) {
     throw new Error(`PostgreSQL did not start (see ${logFile}):\n${started.output}`);
   }
   await waitUntilReady(socketDir, options.port);
-  const roleExists = psql(socketDir, options.port, `SELECT 1 FROM pg_roles WHERE rolname='${appUser}'`);
+  const roleExists = psql(
+    socketDir,
+    options.port,
+    `SELECT 1 FROM pg_roles WHERE rolname='${appUser}'`,
+  );
   if (roleExists !== '1') {
-    psql(socketDir, options.port, `CREATE ROLE ${appUser} LOGIN PASSWORD '${appPassword}' CREATEDB`);
+    psql(
+      socketDir,
+      options.port,
+      `CREATE ROLE ${appUser} LOGIN PASSWORD '${appPassword}' CREATEDB`,
+    );
   }
-  const dbExists = psql(socketDir, options.port, `SELECT 1 FROM pg_database WHERE datname='${options.database}'`);
+  if (options.fresh)
+    psql(socketDir, options.port, `DROP DATABASE IF EXISTS ${options.database} WITH (FORCE)`);
+  const dbExists = psql(
+    socketDir,
+    options.port,
+    `SELECT 1 FROM pg_database WHERE datname='${options.database}'`,
+  );
   if (dbExists !== '1') {
     psql(socketDir, options.port, `CREATE DATABASE ${options.database} OWNER ${appUser}`);
   }

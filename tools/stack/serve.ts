@@ -32,17 +32,19 @@ async function main() {
   process.on('SIGTERM', () => void stopAll(0));
   try {
     log('database: applying migrations and the demo scenario');
-    await prepareDatabase(stack.env['DATABASE_URL']!);
+    await prepareDatabase(stack.env['DATABASE_URL']);
     buildAppIfStale(log);
     const server = await startServerProcess({ ...stack.env, STATIC_DIR: builtAppDir });
-    stopServer = server.stop;
+    stopServer = () => server.stop();
     server.child.once('exit', (code) => void stopAll(code ?? 1));
   } catch (error) {
     console.error(`[fieldcurve] ${error instanceof Error ? error.message : String(error)}`);
     await stopAll(1);
     return;
   }
-  const accounts = demoPeople.map((p) => `    ${p.roles.join(', ').padEnd(11)} ${p.email}`).join('\n');
+  const accounts = demoPeople
+    .map((p) => `    ${p.roles.join(', ').padEnd(11)} ${p.email}`)
+    .join('\n');
   console.log(`
   Fieldcurve is running at ${stack.env['APP_URL']}
 

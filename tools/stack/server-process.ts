@@ -22,13 +22,20 @@ async function waitForHealth(url: string, child: ChildProcess): Promise<void> {
 }
 
 /** Runs `server/main.ts` as its own process, the way production runs it, with the stack's config. */
-export async function startServerProcess(env: Record<string, string>, quiet = false): Promise<ServerProcess> {
-  const child = spawn(join(checkoutRoot, 'node_modules', '.bin', 'tsx'), [join(checkoutRoot, 'server', 'main.ts')], {
-    cwd: checkoutRoot,
-    env: { ...process.env, ...env },
-    stdio: quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
-  });
-  await waitForHealth(env['APP_URL']!, child);
+export async function startServerProcess(
+  env: Record<string, string>,
+  quiet = false,
+): Promise<ServerProcess> {
+  const child = spawn(
+    join(checkoutRoot, 'node_modules', '.bin', 'tsx'),
+    [join(checkoutRoot, 'server', 'main.ts')],
+    {
+      cwd: checkoutRoot,
+      env: { ...process.env, ...env },
+      stdio: quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
+    },
+  );
+  await waitForHealth(env['APP_URL'], child);
   return {
     child,
     stop: () =>

@@ -46,7 +46,12 @@ export class AccountStore {
   /** Creates an account, or returns undefined when the e-mail is taken. */
   create(email: string, name: string, password: string): Account | undefined {
     if (this.findByEmail(email)) return undefined;
-    const account = { id: randomUUID(), email: email.trim().toLowerCase(), name: name.trim(), passwordHash: hashPassword(password) };
+    const account = {
+      id: randomUUID(),
+      email: email.trim().toLowerCase(),
+      name: name.trim(),
+      passwordHash: hashPassword(password),
+    };
     this.accounts.push(account);
     writeFileSync(this.file, JSON.stringify(this.accounts, null, 2));
     return account;
@@ -54,6 +59,7 @@ export class AccountStore {
 
   /** Makes sure each seeded account exists (used for the demo organisation's people). */
   seed(seeds: readonly { email: string; name: string; password: string }[]): void {
-    for (const seedAccount of seeds) this.create(seedAccount.email, seedAccount.name, seedAccount.password);
+    for (const seedAccount of seeds)
+      this.create(seedAccount.email, seedAccount.name, seedAccount.password);
   }
 }

@@ -24,10 +24,16 @@ export interface RunningIdentityProvider {
 /** Signing key and cookie keys are kept on disk so sessions survive a restart of the stack. */
 function persistentSecrets(dir: string) {
   const file = join(dir, 'identity-provider-keys.json');
-  if (existsSync(file)) return JSON.parse(readFileSync(file, 'utf8')) as { jwk: object; cookieKeys: string[] };
+  if (existsSync(file))
+    return JSON.parse(readFileSync(file, 'utf8')) as { jwk: object; cookieKeys: string[] };
   const { privateKey } = generateKeyPairSync('rsa', { modulusLength: 2048 });
   const secrets = {
-    jwk: { ...privateKey.export({ format: 'jwk' }), use: 'sig', alg: 'RS256', kid: randomBytes(8).toString('hex') },
+    jwk: {
+      ...privateKey.export({ format: 'jwk' }),
+      use: 'sig',
+      alg: 'RS256',
+      kid: randomBytes(8).toString('hex'),
+    },
     cookieKeys: [randomBytes(32).toString('hex')],
   };
   writeFileSync(file, JSON.stringify(secrets), { mode: 0o600 });
@@ -38,7 +44,9 @@ function persistentSecrets(dir: string) {
  * The local stand-in for an OpenID Connect provider, built on oidc-provider: code flow with PKCE
  * required, one confidential client for the app, and Fieldcurve-styled sign-in pages.
  */
-export async function startIdentityProvider(options: IdentityProviderOptions): Promise<RunningIdentityProvider> {
+export async function startIdentityProvider(
+  options: IdentityProviderOptions,
+): Promise<RunningIdentityProvider> {
   const issuer = `http://127.0.0.1:${options.port}`;
   const accounts = new AccountStore(join(options.dir, 'identity-provider-accounts.json'));
   accounts.seed(options.accounts);
@@ -55,7 +63,10 @@ export async function startIdentityProvider(options: IdentityProviderOptions): P
       },
     ],
     jwks: { keys: [secrets.jwk as never] },
-    cookies: { keys: secrets.cookieKeys, names: { session: 'idp.session', interaction: 'idp.interaction', resume: 'idp.resume' } },
+    cookies: {
+      keys: secrets.cookieKeys,
+      names: { session: 'idp.session', interaction: 'idp.interaction', resume: 'idp.resume' },
+    },
     pkce: { required: () => true },
     claims: { openid: ['sub'], email: ['email', 'email_verified'], profile: ['name'] },
     // Carry e-mail and name in the ID token itself, so the app needs no userinfo call.
@@ -67,10 +78,22 @@ export async function startIdentityProvider(options: IdentityProviderOptions): P
       if (!account) return undefined;
       return {
         accountId: account.id,
-        claims: () => ({ sub: account.id, email: account.email, email_verified: true, name: account.name }),
+        claims: () => ({
+          sub: account.id,
+          email: account.email,
+          email_verified: true,
+          name: account.name,
+        }),
       };
     },
-    ttl: { AuthorizationCode: 60, IdToken: 3600, AccessToken: 3600, Interaction: 600, Session: 8 * 3600, Grant: 8 * 3600 },
+    ttl: {
+      AuthorizationCode: 60,
+      IdToken: 3600,
+      AccessToken: 3600,
+      Interaction: 600,
+      Session: 8 * 3600,
+      Grant: 8 * 3600,
+    },
   };
   const provider = new Provider(issuer, configuration);
   const app = express();

@@ -8,10 +8,21 @@ const form = express.urlencoded({ extended: false, limit: '4kb' });
 /** Grants exactly the scopes and claims the app asked for: there is no third party to consent to. */
 async function finishWithGrant(provider: Provider, req: Request, res: Response, accountId: string) {
   const details = await provider.interactionDetails(req, res);
-  const grant = new provider.Grant({ accountId, clientId: String(details.params['client_id']) });
-  grant.addOIDCScope(String(details.params['scope'] ?? 'openid'));
+  const grant = new provider.Grant({ accountId, clientId: param(details.params, 'client_id') });
+  grant.addOIDCScope(param(details.params, 'scope') || 'openid');
   const grantId = await grant.save();
-  await provider.interactionFinished(req, res, { login: { accountId }, consent: { grantId } }, { mergeWithLastSubmission: false });
+  await provider.interactionFinished(
+    req,
+    res,
+    { login: { accountId }, consent: { grantId } },
+    { mergeWithLastSubmission: false },
+  );
+}
+
+/** A request parameter of the interaction as text (absent or non-text parameters become ''). */
+function param(params: Record<string, unknown>, name: string): string {
+  const value = params[name];
+  return typeof value === 'string' ? value : '';
 }
 
 function field(req: Request, name: string): string {
@@ -35,7 +46,7 @@ export function interactionRoutes(provider: Provider, accounts: AccountStore): R
         await finishWithGrant(provider, req, res, details.session.accountId);
         return;
       }
-      res.type('html').send(signInPage(details.uid, String(details.params['login_hint'] ?? '')));
+      res.type('html').send(signInPage(details.uid, param(details.params, 'login_hint')));
     } catch {
       res.status(400).type('html').send(problemPage('This sign-in request has expired.'));
     }
@@ -45,7 +56,12 @@ export function interactionRoutes(provider: Provider, accounts: AccountStore): R
     const email = field(req, 'email');
     const account = accounts.verify(email, field(req, 'password'));
     if (!account) {
-      res.status(401).type('html').send(signInPage(req.params.uid, email, 'That e-mail and password do not match an account.'));
+      res
+        .status(401)
+        .type('html')
+        .send(
+          signInPage(req.params.uid, email, 'That e-mail and password do not match an account.'),
+        );
       return;
     }
     await finishWithGrant(provider, req, res, account.id);
@@ -57,11 +73,15 @@ export function interactionRoutes(provider: Provider, accounts: AccountStore): R
       res.status(400).type('html').send(problemPage('This sign-in request has expired.'));
       return;
     }
-    res.type('html').send(createAccountPage(details.uid, String(details.params['login_hint'] ?? '')));
+    res.type('html').send(createAccountPage(details.uid, param(details.params, 'login_hint')));
   });
 
   router.post('/:uid/create-account', form, async (req, res) => {
-    const [name, email, password] = [field(req, 'name'), field(req, 'email'), field(req, 'password')];
+    const [name, email, password] = [
+      field(req, 'name'),
+      field(req, 'email'),
+      field(req, 'password'),
+    ];
     const problem = !name
       ? 'Enter your name.'
       : !/^[^@\s]+@[^@\s]+\.[^@\s]+$/.test(email)
@@ -72,7 +92,10 @@ export function interactionRoutes(provider: Provider, accounts: AccountStore): R
     const account = problem ? undefined : accounts.create(email, name, password);
     if (!account) {
       const message = problem ?? 'An account with that e-mail already exists; sign in instead.';
-      res.status(400).type('html').send(createAccountPage(req.params.uid, email, message));
+      res
+        .status(400)
+        .type('html')
+        .send(createAccountPage(req.params.uid, email, message));
       return;
     }
     await finishWithGrant(provider, req, res, account.id);

@@ -47,5 +47,8 @@ ${error ? `<p class="error" role="alert">${escapeHtml(error)}</p>` : ''}
 }
 
 export function problemPage(message: string): string {
-  return page('Sign-in problem', `<p class="error" role="alert">${escapeHtml(message)}</p><p class="alt">Go back to Fieldcurve and start signing in again.</p>`);
+  return page(
+    'Sign-in problem',
+    `<p class="error" role="alert">${escapeHtml(message)}</p><p class="alt">Go back to Fieldcurve and start signing in again.</p>`,
+  );
 }

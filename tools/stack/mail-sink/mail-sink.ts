@@ -55,7 +55,9 @@ export async function startMailSink(smtpPort: number, httpPort: number): Promise
     } else if (request.url === '/messages') {
       response.writeHead(200, { 'content-type': 'application/json' }).end(JSON.stringify(messages));
     } else {
-      response.writeHead(200, { 'content-type': 'text/html; charset=utf-8' }).end(renderInbox(messages));
+      response
+        .writeHead(200, { 'content-type': 'text/html; charset=utf-8' })
+        .end(renderInbox(messages));
     }
   });
   await listen(http, httpPort);
