@@ -21,7 +21,11 @@ export default {
     {
       ...common,
       displayName: 'unit',
-      testMatch: ['<rootDir>/shared/**/*.spec.ts', '<rootDir>/server/**/*.spec.ts', '<rootDir>/tools/**/*.spec.ts'],
+      testMatch: [
+        '<rootDir>/shared/**/*.spec.ts',
+        '<rootDir>/server/**/*.spec.ts',
+        '<rootDir>/tools/**/*.spec.ts',
+      ],
     },
     {
       ...common,

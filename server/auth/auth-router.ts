@@ -18,7 +18,9 @@ const returnToSchema = z
 
 function regenerate(req: Request): Promise<void> {
   return new Promise((resolve, reject) =>
-    req.session.regenerate((e) => (e ? reject(e) : resolve())),
+    req.session.regenerate((error: unknown) =>
+      error ? reject(error instanceof Error ? error : new Error(String(error))) : resolve(),
+    ),
   );
 }
 
