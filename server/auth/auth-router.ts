@@ -19,7 +19,9 @@ const returnToSchema = z
 function regenerate(req: Request): Promise<void> {
   return new Promise((resolve, reject) =>
     req.session.regenerate((error: unknown) =>
-      error ? reject(error instanceof Error ? error : new Error(String(error))) : resolve(),
+      error
+        ? reject(error instanceof Error ? error : new Error('The session could not be renewed'))
+        : resolve(),
     ),
   );
 }
