@@ -24,7 +24,7 @@ export function createApp(deps: AppDependencies) {
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
   api.use(loadActor(deps.db));
-  api.use(accessGuard);
+  api.use(accessGuard(deps.db));
   api.use(requireCsrfToken);
   api.use(healthRouter(deps));
   api.use(sessionRouter());

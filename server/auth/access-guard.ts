@@ -1,26 +1,44 @@
 import type { RequestHandler } from 'express';
+import { z } from 'zod';
+import type { Database } from '../db/database';
+import { HttpError, forbidden, notFound, notSignedIn } from '../http/http-error';
 import type { Actor } from './actor';
 import { findAccessRule } from './access-policy';
-import { HttpError, forbidden, notSignedIn } from '../http/http-error';
+import { studyRolesOf } from './study-roles';
+
+const studyIdSchema = z.uuid();
 
 /**
  * The one server-side decision of who may call what. It runs before every API router: the client
- * hides what a role cannot do, but this guard is the authority.
+ * hides what a role cannot do, but this guard is the authority. For study routes it also checks
+ * study membership, and answers 404 rather than 403 for studies the caller may not know exist.
  */
-export const accessGuard: RequestHandler = (req, res, next) => {
-  const rule = findAccessRule(req.method, req.baseUrl + req.path);
-  if (!rule) {
-    throw new HttpError(404, 'not-found', `No API route ${req.method} ${req.originalUrl}.`);
-  }
-  if (rule.access === 'public') {
+export function accessGuard(db: Database): RequestHandler {
+  return async (req, res, next) => {
+    const found = findAccessRule(req.method, req.baseUrl + req.path);
+    if (!found) {
+      throw new HttpError(404, 'not-found', `No API route ${req.method} ${req.originalUrl}.`);
+    }
+    const { rule, params } = found;
+    if (rule.access === 'public') return next();
+    const actor = res.locals['actor'] as Actor | undefined;
+    if (!actor) throw notSignedIn();
+    if (rule.access === 'signed-in') return next();
+    const allowed = rule.access;
+    const needed = `This needs the ${allowed.join(' or ')} role`;
+    if (!actor.roles.some((role) => allowed.includes(role))) throw forbidden(`${needed}.`);
+    if (rule.scope === 'study') {
+      const studyId = studyIdSchema.safeParse(params['studyId']);
+      if (!studyId.success)
+        throw new HttpError(400, 'invalid-input', 'The study id must be a UUID.', [
+          { path: 'studyId', message: 'Must be a UUID' },
+        ]);
+      const studyRoles = await studyRolesOf(db, studyId.data, actor);
+      if (!studyRoles) throw notFound('That study');
+      if (!studyRoles.some((role) => allowed.includes(role)))
+        throw forbidden(`${needed} in this study.`);
+      res.locals['studyRoles'] = studyRoles;
+    }
     next();
-    return;
-  }
-  const actor = res.locals['actor'] as Actor | undefined;
-  if (!actor) throw notSignedIn();
-  if (rule.access !== 'signed-in' && !actor.roles.some((role) => rule.access.includes(role))) {
-    const needed = (rule.access as readonly string[]).join(' or ');
-    throw forbidden(`This needs the ${needed} role.`);
-  }
-  next();
-};
+  };
+}

@@ -1,6 +1,7 @@
 import { match } from 'path-to-regexp';
 import type { AccessRule } from './access-rule';
 import { authAccess } from './auth-access';
+import { featureAccess } from './feature-access';
 import { healthAccess } from '../health/health-access';
 import { membersAccess } from '../members/members-access';
 
@@ -9,6 +10,7 @@ export const accessPolicy: readonly AccessRule[] = [
   ...authAccess,
   ...healthAccess,
   ...membersAccess,
+  ...featureAccess,
 ];
 
 const matchers = accessPolicy.map((rule) => ({
@@ -16,8 +18,15 @@ const matchers = accessPolicy.map((rule) => ({
   matches: match(rule.path, { decode: decodeURIComponent }),
 }));
 
-/** The rule for one request, or undefined when no rule covers it. */
-export function findAccessRule(method: string, path: string): AccessRule | undefined {
-  return matchers.find(({ rule, matches }) => rule.method === method && matches(path) !== false)
-    ?.rule;
+/** The rule for one request and the path's parameters, or undefined when no rule covers it. */
+export function findAccessRule(
+  method: string,
+  path: string,
+): { rule: AccessRule; params: Partial<Record<string, string | string[]>> } | undefined {
+  for (const { rule, matches } of matchers) {
+    if (rule.method !== method) continue;
+    const found = matches(path);
+    if (found) return { rule, params: found.params };
+  }
+  return undefined;
 }

@@ -1,0 +1,39 @@
+import { index, jsonb, pgEnum, pgTable, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { interviewStatuses } from '@shared/interviews/interview-status';
+import { questionnaireVersions } from './questionnaires';
+import { samplingPoints } from './sampling-points';
+import { routes } from './routes';
+import { studies } from './studies';
+import { users } from './users';
+
+export const interviewStatusEnum = pgEnum('interview_status', interviewStatuses);
+
+/**
+ * One interview as the server accepted it. The id is made on the device and is the idempotency
+ * key of sync: the same interview sent twice is stored once.
+ */
+export const interviews = pgTable(
+  'interviews',
+  {
+    id: uuid().primaryKey(),
+    studyId: uuid()
+      .notNull()
+      .references(() => studies.id, { onDelete: 'cascade' }),
+    questionnaireVersionId: uuid()
+      .notNull()
+      .references(() => questionnaireVersions.id, { onDelete: 'restrict' }),
+    routeId: uuid().references(() => routes.id, { onDelete: 'set null' }),
+    pointId: uuid().references(() => samplingPoints.id, { onDelete: 'set null' }),
+    enumeratorId: uuid().references(() => users.id, { onDelete: 'set null' }),
+    status: interviewStatusEnum().notNull().default('received'),
+    answers: jsonb().notNull(),
+    flags: jsonb().notNull().default([]),
+    startedAt: timestamp({ withTimezone: true }).notNull(),
+    finishedAt: timestamp({ withTimezone: true }).notNull(),
+    receivedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (table) => [
+    index('interviews_study_status').on(table.studyId, table.status),
+    index('interviews_route_point').on(table.routeId, table.pointId),
+  ],
+);
