@@ -107,6 +107,11 @@ export default tseslint.config(
     rules: {
       '@typescript-eslint/no-non-null-assertion': 'off',
       '@typescript-eslint/unbound-method': 'off',
+      // Test fixtures hand back untyped DOM (`fixture.nativeElement`) and parsed JSON.
+      '@typescript-eslint/no-unsafe-member-access': 'off',
+      '@typescript-eslint/no-unsafe-call': 'off',
+      '@typescript-eslint/no-unsafe-assignment': 'off',
+      '@angular-eslint/prefer-on-push-component-change-detection': 'off',
     },
   },
 );

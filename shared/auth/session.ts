@@ -18,5 +18,4 @@ export const sessionInfoSchema = z.object({
 });
 export type SessionInfo = z.infer<typeof sessionInfoSchema>;
 
-/** Header that carries the CSRF token on POST, PUT, PATCH and DELETE. */
-export const csrfHeaderName = 'x-csrf-token';
+export { csrfHeaderName } from './csrf-header';
