@@ -42,6 +42,7 @@ export function jestStep(name: string, args: string[], env: Record<string, strin
       '--experimental-vm-modules',
       join(checkoutRoot, 'node_modules', 'jest', 'bin', 'jest.js'),
       '--json',
+      '--passWithNoTests',
       `--outputFile=${report}`,
       ...args,
     ],
