@@ -1,0 +1,128 @@
+import { EstimationError } from '../estimation-error';
+import { assertLogitOverlap } from './logit-overlap';
+import { maximiseLogLikelihood, type LogLikelihoodPoint } from './newton-maximiser';
+
+/** Observations for a logit P(y = 1 | x) = 1 / (1 + exp(−(a + b·x))). */
+export interface BinomialLogitData {
+  readonly x: readonly number[];
+  /** Outcome in [0, 1]: 0/1 answers, or a calibrated purchase probability (fractional logit). */
+  readonly y: readonly number[];
+  /** Case weights; default 1. */
+  readonly weights?: readonly number[];
+  /** Cluster labels (e.g. respondent) for the cluster-robust covariance; none: one per row. */
+  readonly clusters?: readonly (string | number)[];
+}
+
+export interface BinomialLogitFit {
+  readonly intercept: number;
+  readonly slope: number;
+  /** Σ w·[y·log P + (1 − y)·log(1 − P)] (no binomial constant). */
+  readonly logLikelihood: number;
+  /** Inverse information (−H)⁻¹, order [intercept, slope]. */
+  readonly modelCovariance: number[][];
+  /** Sandwich H⁻¹(Σ_g s_g s_gᵀ)H⁻¹ · G/(G − 1) over clusters. */
+  readonly robustCovariance: number[][];
+  readonly clusterCount: number;
+  readonly iterations: number;
+}
+
+/** log(1 + eᶻ) without overflow. */
+export const softplus = (z: number): number =>
+  z > 0 ? z + Math.log1p(Math.exp(-z)) : Math.log1p(Math.exp(z));
+
+/** The logistic function 1 / (1 + e^−z). */
+export const logistic = (z: number): number =>
+  z >= 0 ? 1 / (1 + Math.exp(-z)) : Math.exp(z) / (1 + Math.exp(z));
+
+/**
+ * Maximum-likelihood logit with one regressor by Newton–Raphson (= IRLS for the canonical link).
+ * Refuses separated data ('no-finite-estimate') before iterating.
+ */
+export function fitBinomialLogit(data: BinomialLogitData, field = 'x'): BinomialLogitFit {
+  const { x, y } = data;
+  const w = data.weights ?? x.map(() => 1);
+  assertLogitOverlap(
+    x,
+    y.map((yi, i) => w[i] * yi),
+    y.map((yi, i) => w[i] * (1 - yi)),
+    field,
+  );
+  const evaluate = (params: readonly number[]) => logitLogLikelihood(params, x, y, w);
+  const ybar = y.reduce((s, v, i) => s + w[i] * v, 0) / w.reduce((s, v) => s + v, 0);
+  const fit = maximiseLogLikelihood(evaluate, [Math.log(ybar / (1 - ybar)), 0], field);
+  const [intercept, slope] = fit.params;
+  const robust = clusterSandwich(data, w, intercept, slope, fit.inverseInformation);
+  return {
+    intercept,
+    slope,
+    logLikelihood: fit.logLikelihood,
+    modelCovariance: fit.inverseInformation,
+    robustCovariance: robust.covariance,
+    clusterCount: robust.clusters,
+    iterations: fit.iterations,
+  };
+}
+
+/** Σ w·[y·log P + (1 − y)·log(1 − P)] with its gradient and Hessian in (a, b). */
+function logitLogLikelihood(
+  [a, b]: readonly number[],
+  x: readonly number[],
+  y: readonly number[],
+  w: readonly number[],
+): LogLikelihoodPoint {
+  let value = 0;
+  const g = [0, 0];
+  const h = [
+    [0, 0],
+    [0, 0],
+  ];
+  x.forEach((xi, i) => {
+    const eta = a + b * xi;
+    const p = logistic(eta);
+    value -= w[i] * (y[i] * softplus(-eta) + (1 - y[i]) * softplus(eta));
+    const r = w[i] * (y[i] - p);
+    const v = w[i] * p * (1 - p);
+    g[0] += r;
+    g[1] += r * xi;
+    h[0][0] -= v;
+    h[0][1] -= v * xi;
+    h[1][1] -= v * xi * xi;
+  });
+  h[1][0] = h[0][1];
+  return { value, gradient: g, hessian: h };
+}
+
+function clusterSandwich(
+  data: BinomialLogitData,
+  w: readonly number[],
+  a: number,
+  b: number,
+  bread: number[][],
+): { covariance: number[][]; clusters: number } {
+  const scores = new Map<string | number, [number, number]>();
+  data.x.forEach((xi, i) => {
+    const key = data.clusters?.[i] ?? i;
+    const r = w[i] * (data.y[i] - logistic(a + b * xi));
+    const s = scores.get(key) ?? [0, 0];
+    scores.set(key, [s[0] + r, s[1] + r * xi]);
+  });
+  const g = scores.size;
+  if (g < 2)
+    throw new EstimationError('too-few-observations', 'need at least two clusters', 'respondent');
+  const meat = [
+    [0, 0],
+    [0, 0],
+  ];
+  for (const [s0, s1] of scores.values()) {
+    meat[0][0] += s0 * s0;
+    meat[0][1] += s0 * s1;
+    meat[1][1] += s1 * s1;
+  }
+  meat[1][0] = meat[0][1];
+  const factor = g / (g - 1);
+  const bm = bread.map((row) => [0, 1].map((j) => row[0] * meat[0][j] + row[1] * meat[1][j]));
+  const covariance = bm.map((row) =>
+    [0, 1].map((j) => factor * (row[0] * bread[0][j] + row[1] * bread[1][j])),
+  );
+  return { covariance, clusters: g };
+}
