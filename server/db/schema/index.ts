@@ -10,3 +10,4 @@ export * from './routes';
 export * from './sampling-points';
 export * from './studies';
 export * from './study-members';
+export * from './interview-photos';

@@ -1,4 +1,14 @@
-import { index, jsonb, pgEnum, pgTable, timestamp, uuid } from 'drizzle-orm/pg-core';
+import {
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  text,
+  timestamp,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import { interviewStatuses } from '@shared/interviews/interview-status';
 import { questionnaireVersions } from './questionnaires';
 import { samplingPoints } from './sampling-points';
@@ -31,9 +41,22 @@ export const interviews = pgTable(
     startedAt: timestamp({ withTimezone: true }).notNull(),
     finishedAt: timestamp({ withTimezone: true }).notNull(),
     receivedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    /** Where the device stood when the interview ended, and how sure it was (metres). */
+    latitude: doublePrecision(),
+    longitude: doublePrecision(),
+    gpsAccuracyM: doublePrecision(),
+    /** A keyed hash of what identifies a respondent at a point, for the duplicate check; never a name. */
+    respondentKey: text(),
+    /** Photos the interview refers to; it is complete when that many are stored. */
+    photoCount: integer().notNull().default(0),
+    completeAt: timestamp({ withTimezone: true }),
+    reviewNote: text(),
+    reviewedBy: uuid().references(() => users.id, { onDelete: 'set null' }),
+    reviewedAt: timestamp({ withTimezone: true }),
   },
   (table) => [
     index('interviews_study_status').on(table.studyId, table.status),
     index('interviews_route_point').on(table.routeId, table.pointId),
+    index('interviews_respondent').on(table.studyId, table.respondentKey),
   ],
 );
