@@ -37,7 +37,8 @@ export default {
       ...common,
       displayName: 'e2e',
       testMatch: ['<rootDir>/tests/e2e/**/*.e2e.ts'],
-      testTimeout: 120000,
+      // Jest reads `testTimeout` only from the top-level config, so the browser tests set theirs here.
+      setupFilesAfterEnv: ['<rootDir>/tests/e2e/support/browser-test-timeout.ts'],
     },
   ],
 };

@@ -1,4 +1,4 @@
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { buildAppIfStale, builtAppDir } from './app-build';
 import { freePort } from './free-port';
@@ -25,7 +25,11 @@ async function main(): Promise<number> {
     smtp: await freePort(),
     mailInbox: await freePort(),
   };
-  const stack = await startLocalStack(stateDir('test'), ports, 'fieldcurve_test', true);
+  // Each run gets its own cluster and stand-in state, so two runs on one checkout never collide;
+  // a cold cluster starts in about two seconds.
+  const runDir = join(stateDir('test'), `run-${process.pid}`);
+  mkdirSync(runDir, { recursive: true });
+  const stack = await startLocalStack(runDir, ports, 'fieldcurve_test', true);
   const results: StepResult[] = [];
   let stopServer = async () => {};
   try {
@@ -33,25 +37,30 @@ async function main(): Promise<number> {
     buildAppIfStale(log);
     const server = await startServerProcess({ ...stack.env, STATIC_DIR: builtAppDir }, true);
     stopServer = () => server.stop();
-    const env = { ...stack.env, TEST_APP_URL: stack.env['APP_URL'], STATE_DIR: stateDir('test') };
+    const env = { ...stack.env, TEST_APP_URL: stack.env['APP_URL'], STATE_DIR: runDir };
     if (only.length > 0) {
-      results.push(jestStep('selected tests', only, env));
+      results.push(await jestStep('selected tests', only, env));
     } else {
       results.push(
-        wholeStep('lint', join(checkoutRoot, 'node_modules', '.bin', 'eslint'), [
+        await wholeStep('lint', join(checkoutRoot, 'node_modules', '.bin', 'eslint'), [
           '.',
           '--max-warnings=0',
         ]),
       );
-      results.push(wholeStep('type-check', 'npm', ['run', '--silent', 'typecheck']));
-      results.push(jestStep('server and shared unit tests', ['--selectProjects', 'unit'], env));
-      results.push(jestStep('API tests', ['--selectProjects', 'api'], env));
-      results.push(clientUnitStep());
-      results.push(jestStep('browser tests', ['--selectProjects', 'e2e', '--runInBand'], env));
+      results.push(await wholeStep('type-check', 'npm', ['run', '--silent', 'typecheck']));
+      results.push(
+        await jestStep('server and shared unit tests', ['--selectProjects', 'unit'], env),
+      );
+      results.push(await jestStep('API tests', ['--selectProjects', 'api'], env));
+      results.push(await clientUnitStep());
+      results.push(
+        await jestStep('browser tests', ['--selectProjects', 'e2e', '--runInBand'], env),
+      );
     }
   } finally {
     await stopServer();
     await stack.stop();
+    rmSync(runDir, { recursive: true, force: true });
   }
   console.log('\n[fieldcurve] summary');
   for (const r of results)

@@ -1,4 +1,4 @@
-import { spawnSync } from 'node:child_process';
+import { spawn } from 'node:child_process';
 import { existsSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { checkoutRoot } from './state-dir';
@@ -11,32 +11,48 @@ export interface StepResult {
 
 const bin = (name: string) => join(checkoutRoot, 'node_modules', '.bin', name);
 
-function run(command: string, args: string[], env: Record<string, string>) {
-  return spawnSync(command, args, {
-    cwd: checkoutRoot,
-    stdio: 'inherit',
-    env: { ...process.env, ...env },
+/**
+ * Runs one step as a child process without blocking this process: the stand-ins (identity
+ * provider, mail sink, object store) live in this process and must keep answering meanwhile.
+ */
+function run(
+  command: string,
+  args: string[],
+  env: Record<string, string>,
+): Promise<{ status: number | null }> {
+  return new Promise((resolveRun, reject) => {
+    const child = spawn(command, args, {
+      cwd: checkoutRoot,
+      stdio: 'inherit',
+      env: { ...process.env, ...env },
+    });
+    child.once('error', reject);
+    child.once('close', (status) => resolveRun({ status }));
   });
 }
 
 /** A check that either passes or fails as a whole (lint, type-check). */
-export function wholeStep(
+export async function wholeStep(
   name: string,
   command: string,
   args: string[],
   env: Record<string, string> = {},
-): StepResult {
+): Promise<StepResult> {
   console.log(`\n[fieldcurve] ${name}`);
-  const ok = run(command, args, env).status === 0;
+  const ok = (await run(command, args, env)).status === 0;
   return { name, passed: ok ? 1 : 0, failed: ok ? 0 : 1 };
 }
 
 /** Jest, counting individual tests from its JSON report. */
-export function jestStep(name: string, args: string[], env: Record<string, string>): StepResult {
+export async function jestStep(
+  name: string,
+  args: string[],
+  env: Record<string, string>,
+): Promise<StepResult> {
   console.log(`\n[fieldcurve] ${name}`);
   const report = join(checkoutRoot, 'test-results', `${name.replace(/\W+/g, '-')}.json`);
   rmSync(report, { force: true });
-  const result = run(
+  const result = await run(
     process.execPath,
     [
       '--experimental-vm-modules',
@@ -61,12 +77,12 @@ export function jestStep(name: string, args: string[], env: Record<string, strin
 }
 
 /** The Angular unit tests (Vitest through the CLI), counted from Vitest's JSON report. */
-export function clientUnitStep(): StepResult {
+export async function clientUnitStep(): Promise<StepResult> {
   const name = 'client unit tests';
   console.log(`\n[fieldcurve] ${name}`);
   const report = join(checkoutRoot, 'test-results', 'client-unit.json');
   rmSync(report, { force: true });
-  const result = run(
+  const result = await run(
     bin('ng'),
     ['test', '--watch=false', '--reporters=default', '--reporters=json', `--output-file=${report}`],
     { NG_CLI_ANALYTICS: 'false' },
