@@ -7,6 +7,7 @@ import { csrfTokenFor, requireCsrfToken } from './csrf';
 import { IdentityProvider } from './identity-provider';
 import { resolveSignIn } from './sign-in-resolution';
 import { signInProblemCss, signInProblemPage } from './sign-in-problem-page';
+import { sessionCookieName } from '../http/session-middleware';
 import { findOpenInvitation } from '../members/invitations-repository';
 import { hashInvitationToken } from '../members/invitation-token';
 
@@ -114,7 +115,7 @@ export function authRouter({ db, identity }: AppDependencies): Router {
 
   router.post('/sign-out', requireCsrfToken, async (req, res) => {
     await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
-    res.clearCookie('fieldcurve.sid');
+    res.clearCookie(sessionCookieName);
     res.status(204).end();
   });
 
