@@ -11,6 +11,12 @@ import { securityHeaders } from './http/security-headers';
 import { sessionMiddleware } from './http/session-middleware';
 import { staticApp } from './http/static-app';
 import { membersRouter } from './members/members-router';
+import { fieldRoutesRouter } from './field-routes/field-routes-router';
+import { samplingRouter } from './sampling/sampling-router';
+import { questionnairesRouter } from './questionnaires/questionnaires-router';
+import { studiesRouter } from './studies/studies-router';
+import { fieldSyncRouters, syncBodyParser } from './field-sync/field-sync-routers';
+import { analysisRouters } from './fits/analysis-routers';
 
 /** Builds the whole app without listening, so tests drive it through supertest. */
 export function createApp(deps: AppDependencies) {
@@ -22,6 +28,8 @@ export function createApp(deps: AppDependencies) {
   app.use('/auth', express.urlencoded({ extended: false, limit: '4kb' }), authRouter(deps));
 
   const api = express.Router();
+  // A sync batch may pass 1 MB; its own parser runs first (the next one skips a parsed body).
+  api.use('/field/sync', syncBodyParser);
   api.use(express.json({ limit: '1mb' }));
   api.use(loadActor(deps.db));
   api.use(accessGuard(deps.db));
@@ -29,6 +37,12 @@ export function createApp(deps: AppDependencies) {
   api.use(healthRouter(deps));
   api.use(sessionRouter());
   api.use(membersRouter(deps));
+  api.use(studiesRouter(deps));
+  api.use(questionnairesRouter(deps));
+  api.use(samplingRouter(deps));
+  api.use(fieldRoutesRouter(deps));
+  api.use(fieldSyncRouters(deps));
+  api.use(analysisRouters(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

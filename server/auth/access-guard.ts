@@ -4,6 +4,7 @@ import type { Database } from '../db/database';
 import { HttpError, forbidden, notFound, notSignedIn } from '../http/http-error';
 import type { Actor } from './actor';
 import { findAccessRule } from './access-policy';
+import { admitToken } from './bearer-token';
 import { studyRolesOf } from './study-roles';
 
 const studyIdSchema = z.uuid();
@@ -15,12 +16,15 @@ const studyIdSchema = z.uuid();
  */
 export function accessGuard(db: Database): RequestHandler {
   return async (req, res, next) => {
-    const found = findAccessRule(req.method, req.baseUrl + req.path);
+    // HEAD is GET without the body (Express answers it with the GET handler): same rule.
+    const method = req.method === 'HEAD' ? 'GET' : req.method;
+    const found = findAccessRule(method, req.baseUrl + req.path);
     if (!found) {
       throw new HttpError(404, 'not-found', `No API route ${req.method} ${req.originalUrl}.`);
     }
     const { rule, params } = found;
     if (rule.access === 'public') return next();
+    if (rule.access === 'token') return admitToken(db, req, res).then(() => next());
     const actor = res.locals['actor'] as Actor | undefined;
     if (!actor) throw notSignedIn();
     if (rule.access === 'signed-in') return next();

@@ -14,7 +14,8 @@ export function securityHeaders(config: Config) {
         defaultSrc: ["'self'"],
         scriptSrc: ["'self'"],
         styleSrc: ["'self'", "'unsafe-inline'"],
-        imgSrc: ["'self'", 'data:', 'blob:'],
+        // Review screens show interview photos through presigned links to the object store.
+        imgSrc: ["'self'", 'data:', 'blob:', objectStoreOrigin(config)],
         fontSrc: ["'self'"],
         connectSrc: ["'self'"],
         workerSrc: ["'self'"],
@@ -29,4 +30,10 @@ export function securityHeaders(config: Config) {
     strictTransportSecurity: secure,
     crossOriginEmbedderPolicy: false,
   });
+}
+
+/** The origin presigned photo links point at: the configured endpoint, or the bucket on AWS. */
+function objectStoreOrigin(config: Config): string {
+  if (config.S3_ENDPOINT) return new URL(config.S3_ENDPOINT).origin;
+  return `https://${config.S3_BUCKET}.s3.${config.S3_REGION}.amazonaws.com`;
 }

@@ -12,6 +12,7 @@ import { provideServiceWorker } from '@angular/service-worker';
 import { routes } from './app.routes';
 import { csrfInterceptor } from './core/csrf-interceptor';
 import { errorInterceptor } from './core/error-interceptor';
+import { TOOLBAR_WIDGETS } from './core/toolbar-widgets';
 
 export const appConfig: ApplicationConfig = {
   providers: [
@@ -22,6 +23,16 @@ export const appConfig: ApplicationConfig = {
     provideAppInitializer(() => {
       inject(MatIconRegistry).setDefaultFontSetClass('material-symbols-outlined');
     }),
+    {
+      provide: TOOLBAR_WIDGETS,
+      useValue: [
+        {
+          audience: ['enumerator'],
+          load: () =>
+            import('./features/field/sync/sync-status-chip').then((m) => m.SyncStatusChip),
+        },
+      ],
+    },
     provideServiceWorker('ngsw-worker.js', {
       enabled: !isDevMode(),
       registrationStrategy: 'registerWhenStable:30000',

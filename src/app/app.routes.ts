@@ -20,6 +20,41 @@ export const routes: Routes = [
           import('./features/members/members.routes').then((m) => m.membersRoutes),
       },
       {
+        path: 'studies',
+        canMatch: [roleGuard('researcher', 'supervisor', 'enumerator', 'client')],
+        loadChildren: () =>
+          import('./features/studies/studies.routes').then((m) => m.studiesRoutes),
+      },
+      {
+        path: 'field',
+        canMatch: [roleGuard('enumerator')],
+        loadChildren: () => import('./features/field/field.routes').then((m) => m.fieldRoutes),
+      },
+      {
+        path: 'field-planning',
+        canMatch: [roleGuard('supervisor', 'researcher')],
+        loadChildren: () =>
+          import('./features/field-planning/field-planning.routes').then(
+            (m) => m.fieldPlanningRoutes,
+          ),
+      },
+      {
+        path: 'review',
+        canMatch: [roleGuard('supervisor')],
+        loadChildren: () => import('./features/review/review.routes').then((m) => m.reviewRoutes),
+      },
+      {
+        path: 'analysis',
+        canMatch: [roleGuard('researcher')],
+        loadChildren: () =>
+          import('./features/analysis/analysis.routes').then((m) => m.analysisRoutes),
+      },
+      {
+        path: 'reports',
+        canMatch: [roleGuard('client')],
+        loadChildren: () => import('./features/portal/portal.routes').then((m) => m.portalRoutes),
+      },
+      {
         path: 'system-health',
         canMatch: [roleGuard('admin')],
         loadChildren: () =>

@@ -2,6 +2,7 @@ import { buildAppIfStale, builtAppDir } from './app-build';
 import { startLocalStack } from './local-stack';
 import { prepareDatabase } from './prepare-database';
 import { startServerProcess } from './server-process';
+import { startWorkerProcess } from './worker-process';
 import { stateDir } from './state-dir';
 import { demoPassword, demoPeople } from '../../server/demo/demo-people';
 
@@ -35,7 +36,9 @@ async function main() {
     await prepareDatabase(stack.env['DATABASE_URL']);
     buildAppIfStale(log);
     const server = await startServerProcess({ ...stack.env, STATIC_DIR: builtAppDir });
-    stopServer = () => server.stop();
+    // Fits run in a worker process of their own, as in production.
+    const worker = await startWorkerProcess(stack.env);
+    stopServer = () => Promise.all([worker.stop(), server.stop()]).then(() => undefined);
     server.child.once('exit', (code) => void stopAll(code ?? 1));
   } catch (error) {
     console.error(`[fieldcurve] ${error instanceof Error ? error.message : String(error)}`);

@@ -5,6 +5,7 @@ import { freePort } from './free-port';
 import { startLocalStack } from './local-stack';
 import { prepareDatabase } from './prepare-database';
 import { startServerProcess } from './server-process';
+import { startWorkerProcess } from './worker-process';
 import { checkoutRoot, stateDir } from './state-dir';
 import { clientUnitStep, jestStep, wholeStep, type StepResult } from './test-steps';
 
@@ -36,7 +37,9 @@ async function main(): Promise<number> {
     await prepareDatabase(stack.env['DATABASE_URL']);
     buildAppIfStale(log);
     const server = await startServerProcess({ ...stack.env, STATIC_DIR: builtAppDir }, true);
-    stopServer = () => server.stop();
+    // Fits run in a worker process of their own, as in production.
+    const worker = await startWorkerProcess(stack.env, true);
+    stopServer = () => Promise.all([worker.stop(), server.stop()]).then(() => undefined);
     const env = { ...stack.env, TEST_APP_URL: stack.env['APP_URL'], STATE_DIR: runDir };
     if (only.length > 0) {
       results.push(await jestStep('selected tests', only, env));

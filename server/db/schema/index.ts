@@ -11,3 +11,6 @@ export * from './sampling-points';
 export * from './studies';
 export * from './study-members';
 export * from './interview-photos';
+export * from './fits';
+export * from './schedule-versions';
+export * from './api-tokens';

@@ -49,6 +49,18 @@ export function maximiseLogLikelihood(
       iterations: iteration,
     });
     if (decrement <= 1e-20 * scale && inverse.exact) return done();
+    // The gain a Newton step promises (decrement/2) is then below the rounding noise of ℓ, so a
+    // comparison of likelihoods cannot confirm it: without this the search can keep rejecting
+    // the full step to the maximum and creep about it by half steps until it gives up.
+    if (decrement <= 1e-12 * scale && inverse.exact) {
+      const trial = params.map((p, j) => p + step[j]);
+      const landed = evaluate(trial);
+      if (Number.isFinite(landed.value)) {
+        params = trial;
+        point = landed;
+        continue;
+      }
+    }
     const next = halveUntilBetter(evaluate, params, step, point.value);
     // No improving step left: at the maximum up to rounding, or stuck.
     if (!next) {

@@ -14,15 +14,32 @@ describe('navGroupsFor', () => {
     expect(navGroupsFor(['admin']).map((group) => group.title)).toEqual([null, 'Administration']);
   });
 
-  it.each<Role>(['researcher', 'supervisor', 'enumerator', 'client'])(
-    'shows a %s only Home while their sections have no pages yet',
-    (role) => {
-      expect(labelsFor([role])).toEqual(['Home']);
-    },
-  );
+  it('gives a researcher their studies, the field plans to read and the analysis pages', () => {
+    expect(labelsFor(['researcher'])).toEqual(['Home', 'Studies', 'Field planning', 'Analysis']);
+  });
+
+  it('gives a client the studies shared with them and their reports', () => {
+    expect(labelsFor(['client'])).toEqual(['Home', 'Studies', 'Reports']);
+  });
+
+  it('gives an enumerator their routes and the sync page under Field work', () => {
+    expect(labelsFor(['enumerator'])).toEqual(['Home', 'My routes', 'Sync']);
+    expect(navGroupsFor(['enumerator']).map((group) => group.title)).toEqual([null, 'Field work']);
+  });
+
+  it('gives a supervisor field planning and the review queue', () => {
+    expect(labelsFor(['supervisor'])).toEqual(['Home', 'Studies', 'Field planning', 'Review']);
+  });
 
   it('shows a person with several roles the union, each entry once', () => {
-    expect(labelsFor(['researcher', 'admin'])).toEqual(['Home', 'Members', 'System health']);
+    expect(labelsFor(['researcher', 'admin'])).toEqual([
+      'Home',
+      'Studies',
+      'Field planning',
+      'Analysis',
+      'Members',
+      'System health',
+    ]);
   });
 
   it('still offers Home to someone with no role', () => {

@@ -19,7 +19,44 @@ export interface NavGroup {
 // researchers (Studies, Analysis), supervisors (Routes, Review), enumerators (My routes),
 // clients (Reports).
 const sections: readonly NavGroup[] = [
-  { title: null, items: [{ label: 'Home', icon: 'home', path: '/', audience: 'everyone' }] },
+  {
+    title: null,
+    items: [
+      { label: 'Home', icon: 'home', path: '/', audience: 'everyone' },
+      {
+        label: 'Studies',
+        icon: 'science',
+        path: '/studies',
+        audience: ['researcher', 'supervisor', 'client'],
+      },
+      { label: 'Reports', icon: 'description', path: '/reports', audience: ['client'] },
+    ],
+  },
+  {
+    title: 'Field work',
+    items: [
+      { label: 'My routes', icon: 'route', path: '/field/routes', audience: ['enumerator'] },
+      { label: 'Sync', icon: 'sync', path: '/field/sync', audience: ['enumerator'] },
+    ],
+  },
+  {
+    title: 'Supervision',
+    items: [
+      {
+        label: 'Field planning',
+        icon: 'map',
+        path: '/field-planning',
+        audience: ['supervisor', 'researcher'],
+      },
+      { label: 'Review', icon: 'fact_check', path: '/review', audience: ['supervisor'] },
+    ],
+  },
+  {
+    title: 'Research',
+    items: [
+      { label: 'Analysis', icon: 'query_stats', path: '/analysis', audience: ['researcher'] },
+    ],
+  },
   {
     title: 'Administration',
     items: [

@@ -1,22 +1,43 @@
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
-import { signInAs } from '../testing/sign-in-as';
+import type { SessionInfo } from '@shared/auth/session';
+import { signInAs, sessionInfoWith } from '../testing/sign-in-as';
 import { PageNavigator } from './page-navigator';
 import { Session } from './session';
+import { SessionCache } from './session-cache';
+
+/** The device's copy of the session, in memory. */
+class MemorySessionCache {
+  saved: SessionInfo | null = null;
+  remember(info: SessionInfo): Promise<void> {
+    this.saved = info.roles.includes('enumerator') ? info : null;
+    return Promise.resolve();
+  }
+  recall(): Promise<SessionInfo | null> {
+    return Promise.resolve(this.saved);
+  }
+  forget(): Promise<void> {
+    this.saved = null;
+    return Promise.resolve();
+  }
+}
 
 describe('Session', () => {
   let session: Session;
   let server: HttpTestingController;
+  let cache: MemorySessionCache;
   const goTo = vi.fn();
 
   beforeEach(() => {
     goTo.mockReset();
+    cache = new MemorySessionCache();
     TestBed.configureTestingModule({
       providers: [
         provideHttpClient(),
         provideHttpClientTesting(),
         { provide: PageNavigator, useValue: { goTo } },
+        { provide: SessionCache, useValue: cache },
       ],
     });
     session = TestBed.inject(Session);
@@ -80,5 +101,42 @@ describe('Session', () => {
     await done;
     expect(session.signedIn()).toBe(false);
     expect(goTo).toHaveBeenCalledWith('/');
+  });
+
+  describe('on a device with no network', () => {
+    async function loadWithoutNetwork(): Promise<void> {
+      const loaded = session.ensureLoaded();
+      server.expectOne('/api/session').error(new ProgressEvent('error'));
+      await loaded;
+    }
+
+    it('opens the last enumerator session the device kept', async () => {
+      cache.saved = sessionInfoWith(['enumerator']);
+      await loadWithoutNetwork();
+      expect(session.signedIn()).toBe(true);
+      expect(session.offline()).toBe(true);
+      expect(session.roles()).toEqual(['enumerator']);
+    });
+
+    it('hands an online enumerator session to the device to keep', async () => {
+      const info = await signInAs(['enumerator']);
+      expect(session.offline()).toBe(false);
+      await Promise.resolve();
+      expect(cache.saved).toEqual(info);
+    });
+
+    it('stays unreachable when no session was kept', async () => {
+      await loadWithoutNetwork();
+      expect(session.current().status).toBe('unreachable');
+    });
+
+    it('forgets the kept session when the server says it has ended', async () => {
+      cache.saved = sessionInfoWith(['enumerator']);
+      const loaded = session.ensureLoaded();
+      server.expectOne('/api/session').flush(null, { status: 401, statusText: 'Unauthorized' });
+      await loaded;
+      expect(session.signedIn()).toBe(false);
+      expect(cache.saved).toBeNull();
+    });
   });
 });

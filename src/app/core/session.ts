@@ -5,11 +5,12 @@ import type { Role } from '@shared/auth/roles';
 import type { SessionInfo } from '@shared/auth/session';
 import { withoutErrorNotice } from './error-notice-context';
 import { PageNavigator } from './page-navigator';
+import { SessionCache } from './session-cache';
 
 /** Where the browser stands with the server: not asked yet, signed in, signed out, or no answer. */
 export type SessionState =
   | { readonly status: 'unknown' }
-  | { readonly status: 'signed-in'; readonly info: SessionInfo }
+  | { readonly status: 'signed-in'; readonly info: SessionInfo; readonly fromCache?: boolean }
   | { readonly status: 'signed-out' }
   | { readonly status: 'unreachable' };
 
@@ -18,6 +19,7 @@ export type SessionState =
 export class Session {
   private readonly http = inject(HttpClient);
   private readonly navigator = inject(PageNavigator);
+  private readonly cache = inject(SessionCache);
   private readonly state = signal<SessionState>({ status: 'unknown' });
   private pendingLoad: Promise<void> | null = null;
 
@@ -27,6 +29,11 @@ export class Session {
     return state.status === 'signed-in' ? state.info : null;
   });
   readonly signedIn = computed(() => this.state().status === 'signed-in');
+  /** Signed in from the device's copy because the server could not be reached (field work). */
+  readonly offline = computed(() => {
+    const state = this.state();
+    return state.status === 'signed-in' && state.fromCache === true;
+  });
   readonly roles = computed<readonly Role[]>(() => this.info()?.roles ?? []);
   readonly csrfToken = computed(() => this.info()?.csrfToken ?? null);
 
@@ -53,6 +60,7 @@ export class Session {
   markSignedOut(): void {
     this.state.set({ status: 'signed-out' });
     this.pendingLoad = Promise.resolve();
+    void this.cache.forget().catch(() => undefined);
   }
 
   async signOut(): Promise<void> {
@@ -67,9 +75,15 @@ export class Session {
         this.http.get<SessionInfo>('/api/session', { context: withoutErrorNotice() }),
       );
       this.state.set({ status: 'signed-in', info });
+      void this.cache.remember(info).catch(() => undefined);
     } catch (error) {
       const signedOut = error instanceof HttpErrorResponse && error.status === 401;
-      this.state.set({ status: signedOut ? 'signed-out' : 'unreachable' });
+      if (signedOut) return this.markSignedOut();
+      // An enumerator who signed in once keeps working with no network (see SessionCache).
+      const cached = await this.cache.recall().catch(() => null);
+      this.state.set(
+        cached ? { status: 'signed-in', info: cached, fromCache: true } : { status: 'unreachable' },
+      );
     }
   }
 }

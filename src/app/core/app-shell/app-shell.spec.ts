@@ -33,7 +33,11 @@ describe('AppShell', () => {
     ]);
   });
 
-  it('shows a field enumerator no administration pages', async () => {
-    expect(await navLinks(['enumerator'])).toEqual(['Home /']);
+  it('shows a field enumerator their field pages and no administration pages', async () => {
+    expect(await navLinks(['enumerator'])).toEqual([
+      'Home /',
+      'My routes /field/routes',
+      'Sync /field/sync',
+    ]);
   });
 });

@@ -1,12 +1,15 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
+import { NgComponentOutlet } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
   ElementRef,
   computed,
+  effect,
   inject,
   signal,
   viewChild,
+  type Type,
 } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatIconButton } from '@angular/material/button';
@@ -17,6 +20,7 @@ import { RouterLink, RouterOutlet } from '@angular/router';
 import { map } from 'rxjs';
 import { navGroupsFor } from '../navigation';
 import { Session } from '../session';
+import { TOOLBAR_WIDGETS } from '../toolbar-widgets';
 import { AccountMenu } from './account-menu';
 import { NavList } from './nav-list';
 
@@ -29,6 +33,7 @@ const wideLayoutQuery = '(min-width: 840px)';
   imports: [
     MatToolbar,
     MatIconButton,
+    NgComponentOutlet,
     MatIcon,
     MatSidenavModule,
     RouterLink,
@@ -54,6 +59,18 @@ export class AppShell {
   protected readonly navGroups = computed(() => navGroupsFor(this.session.roles()));
   protected readonly info = this.session.info;
   private readonly mainContent = viewChild.required<ElementRef<HTMLElement>>('mainContent');
+  private readonly widgets = inject(TOOLBAR_WIDGETS);
+  protected readonly toolbarWidgets = signal<readonly Type<unknown>[]>([]);
+
+  constructor() {
+    effect(() => {
+      const roles = this.session.roles();
+      const wanted = this.widgets.filter((w) => w.audience.some((role) => roles.includes(role)));
+      void Promise.all(wanted.map((widget) => widget.load())).then((loaded) =>
+        this.toolbarWidgets.set(loaded),
+      );
+    });
+  }
 
   /** A plain `#main-content` link would resolve against `<base href>` and leave the page. */
   protected skipToContent(event: Event): void {

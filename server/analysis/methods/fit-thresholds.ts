@@ -1,0 +1,107 @@
+import type { FitSpecOf } from '@shared/analysis/fit-spec';
+import type { Crossing } from '@shared/estimation/price-thresholds/curve-crossing';
+import { analysePriceThresholds } from '@shared/estimation/price-thresholds/price-thresholds';
+import type { ThresholdAnswer } from '@shared/estimation/price-thresholds/threshold-answers';
+import type { AnalysisDataset } from '../analysis-dataset';
+import { weightOf, type RespondentWeights } from '../respondent-weights';
+import { pointFigure, rangeOf, type MethodFit } from './method-fit';
+
+/**
+ * Van Westendorp's four curves and price points; when every respondent answered the two
+ * purchase-likelihood follow-ups, the Newton–Miller–Smith trial curve is the demand curve.
+ */
+export function fitThresholds(
+  dataset: AnalysisDataset<'price-thresholds'>,
+  _spec: FitSpecOf<'price-thresholds'>,
+  weights: RespondentWeights | null,
+): MethodFit {
+  const answers: ThresholdAnswer[] = dataset.rows.map((r) => ({
+    tooCheap: r.tooCheap,
+    cheap: r.cheap,
+    expensive: r.expensive,
+    tooExpensive: r.tooExpensive,
+    weight: weightOf(weights, r.interviewId),
+    likelihoodCheap: r.likelihoodCheap ?? undefined,
+    likelihoodExpensive: r.likelihoodExpensive ?? undefined,
+  }));
+  const withTrial =
+    dataset.rows.length > 0 &&
+    dataset.rows.every((r) => r.likelihoodCheap !== null && r.likelihoodExpensive !== null);
+  const result = analysePriceThresholds({ answers, withTrialCurve: withTrial });
+  const points: [string, Crossing | null][] = [
+    ['Point of marginal cheapness', result.marginalCheapnessPrice],
+    ['Optimal price point', result.optimalPrice],
+    ['Indifference price point', result.indifferencePrice],
+    ['Point of marginal expensiveness', result.marginalExpensivenessPrice],
+  ];
+  const { curves, trial } = result;
+  const kept = dataset.rows.filter(
+    (r) => r.tooCheap <= r.cheap && r.cheap <= r.expensive && r.expensive <= r.tooExpensive,
+  );
+  const observed = rangeOf(kept.flatMap((r) => [r.tooCheap, r.tooExpensive]));
+  return {
+    n: result.n,
+    observations: result.n,
+    coefficients: [],
+    fitStatistics: [
+      { label: 'Respondents', value: result.n },
+      { label: 'Left out: thresholds out of order', value: result.outOfOrderRespondents },
+    ],
+    elasticities: [],
+    keyFigures: [
+      ...points.flatMap(([label, point]) =>
+        point ? [pointFigure(label, 'price', point.price)] : [],
+      ),
+      ...(trial
+        ? [
+            pointFigure(
+              'Price of the highest trial (Newton–Miller–Smith)',
+              'price',
+              trial.maxTrial.price,
+            ),
+            pointFigure(
+              'Revenue-maximising price (trial × price)',
+              'price',
+              trial.maxRevenue.price,
+            ),
+          ]
+        : []),
+    ],
+    tables: [
+      {
+        title: 'Price threshold curves',
+        columns: ['Price', 'Too cheap', 'Cheap', 'Expensive', 'Too expensive'],
+        rows: curves.prices.map((p, i) => [
+          p,
+          curves.tooCheap[i],
+          curves.cheap[i],
+          curves.expensive[i],
+          curves.tooExpensive[i],
+        ]),
+      },
+    ],
+    residuals: [],
+    curve: trial
+      ? {
+          kind: 'piecewise-share',
+          prices: trial.prices,
+          shares: trial.trial,
+          observedPriceRange: observed,
+          n: result.n,
+        }
+      : null,
+    noCurveReason: trial
+      ? null
+      : 'price thresholds give a demand curve only with the purchase-likelihood follow-ups, and not every respondent answered them',
+    evidence: kept.map((r) => ({ range: { low: r.tooCheap, high: r.tooExpensive } })),
+    warnings: result.warnings,
+    assumptions: [
+      ...result.assumptions,
+      ...(trial
+        ? [
+            'trial curve: mean calibrated purchase likelihood, 5 → 0.7, 4 → 0.5, 3 → 0.3, 2 → 0.1, 1 → 0 (common practice)',
+          ]
+        : []),
+    ],
+  };
+}

@@ -1,0 +1,16 @@
+import { sql } from 'drizzle-orm';
+import type { FitDatabase, SqlRunner } from './in-database-model-spec';
+
+/**
+ * Runs the passes of one fit in one transaction (a savepoint inside a caller's transaction), on
+ * one connection, with planner settings that suit one wide aggregate over many rows. LLVM
+ * inlining is switched off: on 10M rows it tripled the JIT compile time (about 80 → 260 ms in
+ * each parallel process) and bought no speed, while the optimised JIT code itself halves the
+ * time of the sums. SET LOCAL ends with the transaction.
+ */
+export function inFitSession<T>(db: FitDatabase, run: (tx: SqlRunner) => Promise<T>): Promise<T> {
+  return db.transaction(async (tx) => {
+    await tx.execute(sql`SET LOCAL jit_inline_above_cost = -1`);
+    return run(tx);
+  });
+}

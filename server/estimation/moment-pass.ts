@@ -1,0 +1,89 @@
+import { sql, type SQL } from 'drizzle-orm';
+import { EstimationError } from '@shared/estimation/estimation-error';
+import { Rational } from '@shared/estimation/exact/rational';
+import { InputProblem } from './input-problem';
+import type { SqlRunner } from './in-database-model-spec';
+import type { ModelVariable, ResolvedModel } from './model-source';
+import { readSymmetricSums, symmetricSumsSelect } from './symmetric-sums';
+
+/** Rows read to choose the shifts: enough for a mean within a few percent of an SD. */
+const SHIFT_SAMPLE_ROWS = 1000;
+
+/** The sums of the first pass, exact, about a shift near each column's mean. */
+export interface ShiftedSums {
+  readonly n: number;
+  /** The origin of each variable: regressors in order, then the response. */
+  readonly shifts: readonly number[];
+  /**
+   * Σ z·zᵀ over z = [1, v₀ … v_k] with v = t − shift (each row times its weight when weighted),
+   * so entry [0][0] is n, or Σw.
+   */
+  readonly products: Rational[][];
+  readonly weighted: boolean;
+}
+
+/** The model's terms in fit order: regressors, then the response. */
+function modelTerms(model: ResolvedModel): readonly ModelVariable[] {
+  return [...model.regressors, model.response];
+}
+
+/**
+ * The first pass: every sum the normal equations need, in ONE aggregate query. Products of
+ * centred values lose no digits to cancellation, so each column is shifted by the mean of its
+ * first rows (a cheap query) — near enough to the mean that Σ(x − c)(y − d) is as accurate as a
+ * centred sum. Refuses an empty source with 'too-few-observations'; throws InputProblem when a
+ * NULL, non-finite or non-positive weight reached the sums.
+ */
+export async function momentPass(runner: SqlRunner, model: ResolvedModel): Promise<ShiftedSums> {
+  const shifts = await sampleMeans(runner, model);
+  const terms = modelTerms(model);
+  const shifted = terms.map(
+    (t, j) => sql`${t.value} - ${shifts[j]}::float8 AS ${sql.raw(`v${j}`)}`,
+  );
+  const refs = terms.map((_, j) => sql.raw(`v${j}`));
+  const weights = model.weights?.value;
+  const variables: SQL[] = weights ? [sql.raw('r'), ...refs.map((v) => sql`r * ${v}`)] : refs;
+  const weightColumns = weights ? [sql`${weights} AS w`, sql`sqrt(${weights}) AS r`] : [];
+  // OFFSET NULL keeps the subquery from being merged into the aggregates (each shifted value is
+  // computed once per row, not once per sum) while leaving the scan free to run in parallel.
+  const query = sql`SELECT count(*) AS rows, ${weights ? sql`min(w) AS wmin, ` : sql``}
+    ${symmetricSumsSelect(variables)}
+    FROM (SELECT ${sql.join([...weightColumns, ...shifted], sql`, `)}
+          FROM ${model.from} OFFSET NULL) AS shifted`;
+  const row = (await runner.execute(query)).rows[0];
+  const n = Number(row['rows']);
+  const sums = readSymmetricSums(row, variables.length);
+  if (!sums || sums.counts.some((c) => c !== n) || (weights && !(Number(row['wmin']) > 0))) {
+    throw new InputProblem('a NULL, non-finite or non-positive value reached the sums');
+  }
+  const products = weights ? sums.products : withConstant(n, sums.linear, sums.products);
+  return { n, shifts, products, weighted: weights !== undefined };
+}
+
+async function sampleMeans(runner: SqlRunner, model: ResolvedModel): Promise<number[]> {
+  const terms = modelTerms(model);
+  const columns = terms.map((t, j) => sql`${t.value} AS ${sql.raw(`t${j}`)}`);
+  const means = terms.map((_, j) => sql.raw(`avg(t${j}) AS a${j}`));
+  const row = (
+    await runner.execute(sql`SELECT count(*) AS rows, ${sql.join(means, sql`, `)}
+      FROM (SELECT ${sql.join(columns, sql`, `)} FROM ${model.from}
+            LIMIT ${SHIFT_SAMPLE_ROWS}) AS sample`)
+  ).rows[0];
+  if (Number(row['rows']) === 0) {
+    throw new EstimationError(
+      'too-few-observations',
+      `${model.label} has no rows to fit`,
+      model.response.column,
+    );
+  }
+  // A column that is NULL throughout the sample keeps origin 0; the full pass reports it.
+  return terms.map((_, j) => {
+    const mean = Number(row[`a${j}`]);
+    return row[`a${j}`] === null || !Number.isFinite(mean) ? 0 : mean;
+  });
+}
+
+function withConstant(n: number, linear: Rational[], products: Rational[][]): Rational[][] {
+  const count = Rational.of(BigInt(n));
+  return [[count, ...linear], ...products.map((row, a) => [linear[a], ...row])];
+}

@@ -1,0 +1,42 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { reviewActionSchema } from '@shared/field-sync/review-action';
+import { reviewQueueQuerySchema } from '@shared/field-sync/review-queue';
+import type { AppDependencies } from '../app-dependencies';
+import { actorOf } from '../auth/actor';
+import { validate } from '../http/validate';
+import { interviewDetail } from './interview-detail-query';
+import { reviewInterview } from './review-interview';
+import { reviewQueue } from './review-queue-query';
+
+const studyParams = z.object({ studyId: z.uuid('The study id must be a UUID') });
+const interviewParams = studyParams.extend({
+  interviewId: z.uuid('The interview id must be a UUID'),
+});
+
+/** The supervisor's review of a study's interviews; the access policy says who may call. */
+export function reviewRouter(deps: AppDependencies): Router {
+  const { db, storage } = deps;
+  const router = Router();
+
+  router.get('/studies/:studyId/review', async (req, res) => {
+    const { studyId } = validate(studyParams, req.params, 'path');
+    const query = validate(reviewQueueQuerySchema, req.query, 'query');
+    res.json(await reviewQueue(db, studyId, query));
+  });
+
+  router.get('/studies/:studyId/interviews/:interviewId', async (req, res) => {
+    const { studyId, interviewId } = validate(interviewParams, req.params, 'path');
+    res.setHeader('Cache-Control', 'no-store');
+    res.json(await interviewDetail(db, storage, studyId, interviewId));
+  });
+
+  router.post('/studies/:studyId/interviews/:interviewId/review', async (req, res) => {
+    const { studyId, interviewId } = validate(interviewParams, req.params, 'path');
+    const body = validate(reviewActionSchema, req.body);
+    await reviewInterview(db, studyId, interviewId, body, actorOf(res));
+    res.json(await interviewDetail(db, storage, studyId, interviewId));
+  });
+
+  return router;
+}

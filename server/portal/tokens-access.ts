@@ -1,0 +1,8 @@
+import type { AccessRule } from '../auth/access-rule';
+
+/** Clients issue, list and revoke their own read-API tokens in the portal. */
+export const tokensAccess: readonly AccessRule[] = [
+  { method: 'POST', path: '/api/portal/tokens', access: ['client'] },
+  { method: 'GET', path: '/api/portal/tokens', access: ['client'] },
+  { method: 'DELETE', path: '/api/portal/tokens/:tokenId', access: ['client'] },
+];

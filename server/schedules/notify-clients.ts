@@ -1,0 +1,32 @@
+import { and, eq, sql } from 'drizzle-orm';
+import { portalSchedulePath } from '@shared/analysis/portal-paths';
+import type { ScheduleVersion } from '@shared/analysis/schedule-version';
+import type { AppDependencies } from '../app-dependencies';
+import { studyMembers, users } from '../db/schema';
+import { schedulePublishedMail } from './schedule-published-mail';
+
+/**
+ * E-mails every client member of the study about a new version. A mail that fails is logged,
+ * not thrown: the version is published either way.
+ */
+export async function notifyClients(
+  deps: AppDependencies,
+  version: ScheduleVersion,
+): Promise<number> {
+  const clients = await deps.db
+    .select({ email: users.email, name: users.name })
+    .from(studyMembers)
+    .innerJoin(users, eq(users.id, studyMembers.userId))
+    .where(
+      and(eq(studyMembers.studyId, version.studyId), sql`'client' = any(${studyMembers.roles})`),
+    );
+  const link = `${deps.config.APP_URL}${portalSchedulePath(version.studyId, version.id)}`;
+  const sent = await Promise.allSettled(
+    clients.map((to) => deps.mailer.send(schedulePublishedMail({ to, version, link }))),
+  );
+  sent.forEach((outcome, i) => {
+    if (outcome.status === 'rejected')
+      console.error(`[fieldcurve] schedule mail to ${clients[i].email} failed`, outcome.reason);
+  });
+  return sent.filter((s) => s.status === 'fulfilled').length;
+}

@@ -1,0 +1,22 @@
+import { z } from 'zod';
+import { blockCommonShape } from '../block-common';
+
+/** Text: a free answer up to `maxLength` characters, on one line or several. */
+export const textBlockSchema = z.strictObject({
+  ...blockCommonShape,
+  kind: z.literal('text'),
+  maxLength: z.int('A whole number').min(1, 'At least one character').max(4000, 'At most 4000'),
+  multiline: z.boolean({ error: 'Say whether the answer may run over several lines' }),
+});
+export type TextBlock = z.infer<typeof textBlockSchema>;
+
+export function textAnswerSchema(block: TextBlock) {
+  return z.strictObject({
+    value: z
+      .string()
+      .trim()
+      .min(1, 'Type an answer')
+      .max(block.maxLength, `At most ${block.maxLength} characters`),
+  });
+}
+export type TextAnswer = z.infer<ReturnType<typeof textAnswerSchema>>;

@@ -1,0 +1,35 @@
+import { z } from 'zod';
+import { nonNegativeMinorSchema, positiveMinorSchema } from '../../money/minor-amount';
+import { blockCommonShape } from '../block-common';
+
+/**
+ * Open willingness to pay: the most the respondent would pay, typed as an amount. The range
+ * (minor units) catches slipped digits on the device; zero is a valid answer.
+ */
+export const wtpOpenBlockSchema = z
+  .strictObject({
+    ...blockCommonShape,
+    kind: z.literal('wtp-open'),
+    minMinor: nonNegativeMinorSchema,
+    maxMinor: positiveMinorSchema,
+  })
+  .superRefine((block, ctx) => {
+    if (block.maxMinor <= block.minMinor) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['maxMinor'],
+        message: `The highest amount (${block.maxMinor}) must be above the lowest (${block.minMinor})`,
+      });
+    }
+  });
+export type WtpOpenBlock = z.infer<typeof wtpOpenBlockSchema>;
+
+/** The amount, within the block's range. */
+export function wtpOpenAnswerSchema(block: WtpOpenBlock) {
+  return z.strictObject({
+    amountMinor: nonNegativeMinorSchema
+      .min(block.minMinor, { error: `Must be at least ${block.minMinor} minor units` })
+      .max(block.maxMinor, { error: `Must be at most ${block.maxMinor} minor units` }),
+  });
+}
+export type WtpOpenAnswer = z.infer<ReturnType<typeof wtpOpenAnswerSchema>>;

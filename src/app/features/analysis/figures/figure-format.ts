@@ -1,0 +1,57 @@
+import type { EstimatedFigure } from './estimated-figure';
+
+/** The kinds of number the analysis screens show, each with its own way of writing. */
+export type FigureUnit = 'price' | 'share' | 'quantity' | 'elasticity' | 'index' | 'count';
+
+/**
+ * Writes figures for one study: prices in its currency and locale, shares as percentages,
+ * elasticities to two decimals, quantities to four significant digits.
+ */
+export class FigureFormat {
+  private readonly formats: Record<FigureUnit, Intl.NumberFormat>;
+
+  constructor(
+    readonly currency: string,
+    readonly locale: string,
+  ) {
+    const plain = (options: Intl.NumberFormatOptions) => new Intl.NumberFormat(locale, options);
+    this.formats = {
+      // Whole amounts without ".00": schedules are mostly on round prices.
+      price: plain({
+        style: 'currency',
+        currency,
+        maximumFractionDigits: 2,
+        trailingZeroDisplay: 'stripIfInteger',
+      } as Intl.NumberFormatOptions),
+      share: plain({ style: 'percent', maximumFractionDigits: 1 }),
+      quantity: plain({ maximumSignificantDigits: 4 }),
+      elasticity: plain({ minimumFractionDigits: 2, maximumFractionDigits: 2 }),
+      index: plain({ maximumSignificantDigits: 4 }),
+      count: plain({ maximumFractionDigits: 0 }),
+    };
+  }
+
+  /** One number; a dash for a missing one. */
+  value(value: number | null | undefined, unit: FigureUnit): string {
+    if (value === null || value === undefined || !Number.isFinite(value)) return '–';
+    return this.formats[unit].format(value);
+  }
+
+  /** "low to high", or null when there is no interval. */
+  interval(low: number | null, high: number | null, unit: FigureUnit): string | null {
+    if (low === null || high === null) return null;
+    return `${this.value(low, unit)} to ${this.value(high, unit)}`;
+  }
+
+  /** "12.30 (95 % interval 11.10 to 13.90)" for reading aloud and for tables. */
+  figure(figure: EstimatedFigure, unit: FigureUnit, confidenceLevel: number): string {
+    const interval = this.interval(figure.low, figure.high, unit);
+    const value = this.value(figure.estimate, unit);
+    return interval ? `${value} (${levelLabel(confidenceLevel)} interval ${interval})` : value;
+  }
+}
+
+/** "95 %" for 0.95. */
+export function levelLabel(confidenceLevel: number): string {
+  return `${Math.round(confidenceLevel * 1000) / 10} %`;
+}

@@ -1,0 +1,65 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { MatCardModule } from '@angular/material/card';
+import { MatIcon } from '@angular/material/icon';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import { AnalysisWorkspaceState } from '../analysis-workspace-state';
+import { DemandChart } from '../charts/demand-chart';
+import { demandAxisTitles, fitBandedCurve } from '../charts/fit-curves';
+import { ResidualChart } from '../charts/residual-chart';
+import { curveEnsemble } from '../figures/curve-ensemble';
+import { EstimateValue } from '../figures/estimate-value';
+import { ScheduleTable } from '../schedule/schedule-table';
+import { CoefficientTable } from './coefficient-table';
+import { CurveQuestionCard } from './curve-question-card';
+import { FitPicker } from './fit-picker';
+
+/** A finished fit: its curve with band and revenue, figures, coefficients and diagnostics. */
+@Component({
+  selector: 'app-fit-results-page',
+  imports: [
+    CoefficientTable,
+    CurveQuestionCard,
+    DatePipe,
+    DemandChart,
+    EstimateValue,
+    FitPicker,
+    MatCardModule,
+    MatIcon,
+    MatProgressBar,
+    ResidualChart,
+    RouterLink,
+    ScheduleTable,
+  ],
+  templateUrl: './fit-results-page.html',
+  styleUrl: './fit-results-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class FitResultsPage {
+  protected readonly state = inject(AnalysisWorkspaceState);
+  protected readonly fit = this.state.selectedFit;
+  protected readonly result = computed(() => this.fit()?.result ?? null);
+  protected readonly level = computed(() => this.fit()?.spec.confidenceLevel ?? 0.95);
+
+  protected readonly curve = computed(() => {
+    const fit = this.fit();
+    const result = this.result();
+    return fit && result ? fitBandedCurve(result.methodLabel, fit.spec, result) : null;
+  });
+  protected readonly ensemble = computed(() => {
+    const result = this.result();
+    return result?.curve ? curveEnsemble(result.curve, this.level()) : null;
+  });
+  protected readonly titles = computed(() =>
+    demandAxisTitles(this.curve()?.quantityKind ?? 'quantity', this.result()?.currency ?? ''),
+  );
+  protected readonly startPrice = computed(() => {
+    const range = this.result()?.curve?.observedPriceRange;
+    return range ? Math.round(((range.min + range.max) / 2) * 100) / 100 : 0;
+  });
+
+  protected pick(fitId: string): void {
+    void this.state.selectFit(fitId);
+  }
+}

@@ -1,0 +1,168 @@
+import { Injectable, computed, inject, signal } from '@angular/core';
+import type { FieldQuestionnaireVersion, FieldStudy } from '@shared/field-sync/field-assignments';
+import type { BidLevel } from '@shared/questionnaire/bid-design';
+import { validateInterviewAnswers } from '@shared/questionnaire/interview-answers';
+import type { RouteStop } from '@shared/routes/field-route';
+import { AssignmentsCache } from '../assignments/assignments-cache';
+import { routeOf, stopOf, studyOf, versionOf } from '../assignments/assignment-lookup';
+import type { DraftInterview, OutboxEntry } from '../data/field-records';
+import { FieldStore } from '../data/field-store';
+import { answerIssues, type AnswerIssue } from './answer-check';
+import { InterviewDrafts } from './interview-drafts';
+import { isRefusal, nextStep, previousStep, withoutHiddenAnswers } from './interview-flow';
+
+/** What the runner needs about the interview beyond its draft. */
+export interface InterviewSetting {
+  readonly version: FieldQuestionnaireVersion;
+  readonly study: FieldStudy | null;
+  readonly stop: RouteStop | null;
+  /** The outbox entry this draft corrects (returned or refused), with the reason. */
+  readonly correcting: OutboxEntry | null;
+}
+
+/**
+ * The interview on screen: its draft, the block shown, the answer being given, and the moves
+ * between blocks. Each move is written to the device database before the screen changes.
+ */
+@Injectable()
+export class InterviewSession {
+  private readonly drafts = inject(InterviewDrafts);
+  private readonly assignments = inject(AssignmentsCache);
+  private readonly store = inject(FieldStore);
+
+  readonly draft = signal<DraftInterview | null>(null);
+  readonly setting = signal<InterviewSetting | null>(null);
+  readonly loadProblem = signal<string | null>(null);
+  readonly pending = signal<unknown>(undefined);
+  readonly issues = signal<readonly AnswerIssue[]>([]);
+  readonly bids = signal<Record<string, BidLevel>>({});
+  readonly busy = signal(false);
+
+  readonly blocks = computed(() => this.setting()?.version.definition.blocks ?? []);
+  readonly step = computed(() => this.draft()?.step ?? 0);
+  readonly answers = computed(() => this.draft()?.answers ?? {});
+  readonly block = computed(() => this.blocks()[this.step()] ?? null);
+  readonly atEnd = computed(() => this.setting() !== null && this.block() === null);
+
+  async load(id: string): Promise<void> {
+    const draft = await this.drafts.get(id);
+    const cached = await this.assignments.read();
+    const version =
+      cached && draft ? versionOf(cached.payload, draft.questionnaireVersionId) : null;
+    if (!draft || !cached || !version) {
+      this.loadProblem.set(
+        draft
+          ? 'The questionnaire of this interview is no longer on the device. Update your routes.'
+          : 'This interview is not on the device: it was finished, discarded or never started here.',
+      );
+      return;
+    }
+    const route = routeOf(cached.payload, draft.routeId)?.route;
+    this.setting.set({
+      version,
+      study: studyOf(cached.payload, draft.studyId),
+      stop: route ? stopOf(route, draft.pointId) : null,
+      correcting: (await this.store.db.outbox.get(id)) ?? null,
+    });
+    this.draft.set(draft);
+    this.bids.set(draft.bids);
+    await this.enterStep(draft.step);
+  }
+
+  /** The answer given on screen, saved as it is typed so a closed tab loses nothing. */
+  async change(answer: unknown): Promise<void> {
+    const draft = this.draft();
+    const block = this.block();
+    this.pending.set(answer);
+    this.issues.set([]);
+    if (draft && block) await this.drafts.saveAnswer(draft.id, block.id, answer, draft.step);
+  }
+
+  /** Checks the answer and moves to the next block asked; 'refused' when consent was declined. */
+  async next(): Promise<'moved' | 'invalid' | 'refused'> {
+    const draft = this.draft();
+    const block = this.block();
+    if (!draft || !block) return 'invalid';
+    const answer = this.pending();
+    const issues = answerIssues(block, answer);
+    if (issues.length > 0) {
+      this.issues.set(issues);
+      return 'invalid';
+    }
+    if (isRefusal(block, answer)) {
+      await this.drafts.refuse(draft.id);
+      return 'refused';
+    }
+    const answers = { ...draft.answers, [block.id]: answer };
+    if (answer === undefined) delete answers[block.id];
+    const asked = withoutHiddenAnswers(this.blocks(), answers);
+    await this.moveTo(nextStep(this.blocks(), asked, draft.step), block.id, answer);
+    return 'moved';
+  }
+
+  async back(): Promise<void> {
+    const draft = this.draft();
+    if (!draft) return;
+    const asked = withoutHiddenAnswers(this.blocks(), draft.answers);
+    const target = previousStep(this.blocks(), asked, draft.step);
+    if (target === null) return;
+    const block = this.block();
+    await this.moveTo(target, block?.id ?? null, this.pending());
+  }
+
+  /** Problems left with the whole interview; empty when it can be finished. */
+  finalProblems(): { blockIndex: number | null; message: string; prompt: string }[] {
+    const setting = this.setting();
+    if (!setting) return [];
+    const blocks = this.blocks();
+    const answers = withoutHiddenAnswers(blocks, this.answers());
+    return validateInterviewAnswers(setting.version.definition, answers).map((problem) => ({
+      blockIndex: problem.blockIndex,
+      message: problem.message,
+      prompt: problem.blockIndex === null ? '' : blocks[problem.blockIndex].prompt,
+    }));
+  }
+
+  async finish(): Promise<OutboxEntry> {
+    const draft = this.draft();
+    const setting = this.setting();
+    if (!draft || !setting) throw new Error('No interview is open');
+    return this.drafts.finish(draft.id, setting.version);
+  }
+
+  async discard(): Promise<void> {
+    const draft = this.draft();
+    if (draft) await this.drafts.discard(draft.id);
+  }
+
+  async goTo(step: number): Promise<void> {
+    await this.moveTo(step, null, undefined);
+  }
+
+  private async moveTo(step: number, blockId: string | null, answer: unknown): Promise<void> {
+    const draft = this.draft();
+    if (!draft) return;
+    this.busy.set(true);
+    try {
+      if (blockId) await this.drafts.saveAnswer(draft.id, blockId, answer, step);
+      else await this.store.db.drafts.update(draft.id, { step });
+      const saved = await this.drafts.get(draft.id);
+      if (saved) this.draft.set(saved);
+      await this.enterStep(step);
+    } finally {
+      this.busy.set(false);
+    }
+  }
+
+  /** Shows the stored answer of the block at `step`, drawing its bid first if it needs one. */
+  private async enterStep(step: number): Promise<void> {
+    const draft = this.draft();
+    const block = this.blocks()[step];
+    this.issues.set([]);
+    this.pending.set(block && draft ? draft.answers[block.id] : undefined);
+    if (draft && block?.kind === 'dichotomous-choice' && !this.bids()[block.id]) {
+      const bid = await this.drafts.bidFor(draft.id, block);
+      this.bids.update((held) => ({ ...held, [block.id]: bid }));
+    }
+  }
+}

@@ -1,0 +1,107 @@
+import { DatePipe } from '@angular/common';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  signal,
+} from '@angular/core';
+import { MatButton } from '@angular/material/button';
+import { MatCardModule } from '@angular/material/card';
+import { MatIcon } from '@angular/material/icon';
+import { RouterLink } from '@angular/router';
+import type { InterviewDetail } from '@shared/field-sync/interview-detail';
+import { reviewActionSchema, type ReviewAction } from '@shared/field-sync/review-action';
+import type { Study } from '@shared/studies/study';
+import { readApiProblem } from '../../core/api-problem';
+import { describeAnswer } from './answer-summary';
+import { PositionPlot } from './position-plot';
+import { ReviewApi } from './review-api';
+import { flagDetail, formatDuration, statusLabels } from './review-words';
+
+const actionWords: Record<ReviewAction, string> = {
+  accept: 'Accepted.',
+  return: 'Returned to the enumerator with your note.',
+  reject: 'Rejected.',
+};
+
+/** One interview under review: answers per block, flags, positions, photos, and the decision. */
+@Component({
+  selector: 'app-interview-review-page',
+  imports: [DatePipe, MatButton, MatCardModule, MatIcon, PositionPlot, RouterLink],
+  templateUrl: './interview-review-page.html',
+  styleUrl: './interview-review-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class InterviewReviewPage {
+  private readonly api = inject(ReviewApi);
+
+  readonly studyId = input.required<string>();
+  readonly interviewId = input.required<string>();
+  protected readonly detail = signal<InterviewDetail | null>(null);
+  protected readonly study = signal<Study | null>(null);
+  protected readonly problem = signal<string | null>(null);
+  protected readonly note = signal('');
+  protected readonly noteProblem = signal<string | null>(null);
+  protected readonly done = signal<string | null>(null);
+  protected readonly sending = signal(false);
+  protected readonly statusLabels = statusLabels;
+  protected readonly flagDetail = flagDetail;
+  protected readonly formatDuration = formatDuration;
+
+  protected readonly answers = computed(() => {
+    const detail = this.detail();
+    const study = this.study();
+    if (!detail) return [];
+    return detail.definition.blocks.map((block) => ({
+      id: block.id,
+      prompt: block.prompt,
+      text: describeAnswer(
+        block,
+        detail.answers[block.id],
+        study?.currency ?? 'USD',
+        study?.locale ?? 'en',
+      ),
+    }));
+  });
+  protected readonly canDecide = computed(() => {
+    const status = this.detail()?.status;
+    return status === 'received' || status === 'flagged';
+  });
+
+  constructor() {
+    effect(() => {
+      const [studyId, interviewId] = [this.studyId(), this.interviewId()];
+      this.api
+        .study(studyId)
+        .subscribe({ next: (study) => this.study.set(study), error: () => undefined });
+      this.api.interview(studyId, interviewId).subscribe({
+        next: (detail) => this.detail.set(detail),
+        error: (error: unknown) => this.problem.set(readApiProblem(error).message),
+      });
+    });
+  }
+
+  protected decide(action: ReviewAction): void {
+    const parsed = reviewActionSchema.safeParse({ action, note: this.note().trim() || undefined });
+    if (!parsed.success) {
+      this.noteProblem.set(parsed.error.issues[0]?.message ?? 'Write a note');
+      return;
+    }
+    this.noteProblem.set(null);
+    this.sending.set(true);
+    this.api.review(this.studyId(), this.interviewId(), parsed.data).subscribe({
+      next: (detail) => {
+        this.detail.set(detail);
+        this.done.set(actionWords[action]);
+        this.sending.set(false);
+      },
+      error: (error: unknown) => {
+        this.problem.set(readApiProblem(error).message);
+        this.sending.set(false);
+      },
+    });
+  }
+}

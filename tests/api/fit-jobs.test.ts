@@ -1,0 +1,195 @@
+import { jest } from '@jest/globals';
+import { eq, inArray, sql } from 'drizzle-orm';
+import type { FitResource } from '@shared/analysis/fit-resource';
+import type { FitSpec, FitSpecOf } from '@shared/analysis/fit-spec';
+import { loadFitInput } from '../../server/analysis/load-fit-input';
+import { runFit } from '../../server/analysis/run-fit';
+import { fits } from '../../server/db/schema';
+import { jobSchema } from '../../server/fits/fit-queue';
+import { fitSender, stopFitSenders } from '../../server/fits/fit-sender';
+import { runFitJob } from '../../server/fits/run-fit-job';
+import { startWorkerProcess, type WorkerProcess } from '../../tools/stack/worker-process';
+import { insertLanternData } from '../support/analysis-study';
+import { insertAwkwardData } from '../support/awkward-study';
+import { commonSpec, manySpecs, shelfLogLog } from '../support/fit-specs';
+import { signedInAgent, type SignedInAgent } from '../support/signed-in-agent';
+import { insertStudy } from '../support/study-rows';
+import { createTestApp } from '../support/test-app';
+import { createTestOrganisation } from '../support/test-organisation';
+
+const { app, deps } = createTestApp();
+const workers: WorkerProcess[] = [];
+let researcher: SignedInAgent;
+let studyId: string;
+let awkwardStudyId: string;
+
+jest.setTimeout(240_000);
+
+beforeAll(async () => {
+  const organisation = await createTestOrganisation(deps.db, 'Fit jobs');
+  const members = [{ person: organisation.people.researcher, roles: ['researcher' as const] }];
+  studyId = await insertStudy(deps.db, organisation.id, members, 'Lantern fits');
+  awkwardStudyId = await insertStudy(deps.db, organisation.id, members, 'Awkward fits');
+  await insertLanternData(deps.db, studyId);
+  await insertAwkwardData(deps.db, awkwardStudyId);
+  researcher = await signedInAgent(app, deps.db, deps.config.SESSION_SECRET, {
+    userId: organisation.people.researcher.userId,
+    organisationId: organisation.id,
+  });
+  // Two worker processes against the one queue, as two machines would run them.
+  workers.push(
+    ...(await Promise.all([startWorkerProcess({}, true), startWorkerProcess({}, true)])),
+  );
+});
+
+afterAll(async () => {
+  await Promise.all(workers.map((w) => w.stop()));
+  await stopFitSenders();
+  await deps.db.$client.end();
+});
+
+async function requestFit(study: string, spec: FitSpec): Promise<string> {
+  const response = await researcher.post(`/api/studies/${study}/fits`, { spec });
+  expect(response.status).toBe(202);
+  return response.body.fitId as string;
+}
+
+/** Polls until every fit is done or failed. */
+async function settled(ids: string[]): Promise<(typeof fits.$inferSelect)[]> {
+  for (let i = 0; i < 600; i++) {
+    const rows = await deps.db.select().from(fits).where(inArray(fits.id, ids));
+    if (rows.every((r) => r.status === 'done' || r.status === 'failed')) return rows;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error('fits did not finish within 120 s');
+}
+
+const plain = <T>(value: T): T => JSON.parse(JSON.stringify(value)) as T;
+
+describe('fit jobs on the queue', () => {
+  let ids: string[];
+  let rows: (typeof fits.$inferSelect)[];
+
+  beforeAll(async () => {
+    ids = [];
+    for (const spec of [...manySpecs, ...manySpecs]) ids.push(await requestFit(studyId, spec));
+    rows = await settled(ids);
+  });
+
+  it('runs every job exactly once, spread over more than one worker', async () => {
+    expect(rows.map((r) => [r.status, r.attempts])).toEqual(ids.map(() => ['done', 1]));
+    expect(new Set(rows.map((r) => r.workerId)).size).toBeGreaterThanOrEqual(2);
+    const jobs = await deps.db.execute<{ id: string; state: string; retry_count: number }>(
+      sql.raw(
+        `select id::text, state, retry_count from ${jobSchema}.job where id in (${ids.map((id) => `'${id}'`).join(',')})`,
+      ),
+    );
+    expect(jobs.rows).toHaveLength(ids.length);
+    expect(jobs.rows.every((j) => j.state === 'completed' && j.retry_count === 0)).toBe(true);
+  });
+
+  it('stores exactly what the engine gives in-process on the same data', async () => {
+    for (const row of rows) {
+      const spec = row.spec as FitSpec;
+      const expected = runFit(await loadFitInput(deps.db, studyId, spec.filters), spec);
+      expect(row.result).toEqual(plain(expected));
+      expect(row.dataHash).toBe(expected.dataHash);
+    }
+  });
+
+  it('gives the same spec on the same data the same numbers and data hash', () => {
+    const half = manySpecs.length;
+    rows.sort((a, b) => ids.indexOf(a.id) - ids.indexOf(b.id));
+    for (let k = 0; k < half; k++) {
+      expect(rows[k + half].result).toEqual(rows[k].result);
+    }
+    // Different filters use different rows, so their hashes differ (dichotomous: flagged in/out).
+    expect(rows[half - 1].dataHash).not.toBe(rows[half - 2].dataHash);
+  });
+
+  it('stores one result when a job is delivered again', async () => {
+    const [first] = rows;
+    await runFitJob(deps.db, first.id, 'test-redelivery');
+    expect(await fitSender(deps.config.DATABASE_URL).send(first.id)).toBe(false);
+    await new Promise((r) => setTimeout(r, 1500));
+    const [again] = await deps.db.select().from(fits).where(eq(fits.id, first.id));
+    expect(again.attempts).toBe(1);
+    expect(again.workerId).toBe(first.workerId);
+    expect(again.result).toEqual(first.result);
+  });
+
+  it('shows progress and the result through the API', async () => {
+    const response = await researcher.get(`/api/studies/${studyId}/fits/${ids[0]}`);
+    const fit = response.body as FitResource;
+    expect(fit).toMatchObject({ status: 'done', progress: 100, dataHash: rows[0].dataHash });
+    expect(fit.result?.schedule?.rows).toHaveLength(commonSpec.priceGrid.steps);
+    const list = await researcher.get(`/api/studies/${studyId}/fits`);
+    expect(list.body).toHaveLength(ids.length);
+  });
+});
+
+describe('fits the data refuses', () => {
+  const awkward = (spec: FitSpec) => requestFit(awkwardStudyId, spec);
+  const recall: FitSpecOf<'observed-prices'> = {
+    ...shelfLogLog,
+    source: 'recall',
+    form: 'linear',
+    regionEffects: false,
+    standardErrors: 'classical',
+  };
+
+  it.each([
+    ['a non-positive quantity under a log', shelfLogLog, 'non-positive-log', 'quantity'],
+    [
+      'a filter that leaves no interview',
+      { ...recall, filters: { flagged: 'include', from: '2030-01-01' } },
+      'too-few-observations',
+      'filters',
+    ],
+    [
+      'a singular design',
+      { ...recall, covariates: ['income'], filters: { flagged: 'include', regions: ['East'] } },
+      'singular-design',
+      undefined,
+    ],
+    [
+      'margins raking cannot meet',
+      {
+        ...recall,
+        weighting: {
+          margins: [
+            { variable: 'region', targets: { East: 0.5, West: 0.5 } },
+            { variable: 'income-band', targets: { 'under-10k': 0.8, 'over-50k': 0.2 } },
+          ],
+        },
+      },
+      'not-converged',
+      'targets',
+    ],
+  ] as [string, FitSpec, string, string | undefined][])(
+    'fails a fit with %s, saying so',
+    async (_label, spec, code, field) => {
+      const id = await awkward(spec);
+      const [row] = await settled([id]);
+      expect(row.status).toBe('failed');
+      expect(row.result).toBeNull();
+      expect(row.error).toMatchObject({ code, ...(field ? { field } : {}) });
+      expect((row.error as { message: string }).message.length).toBeGreaterThan(20);
+    },
+  );
+
+  it('allows prices outside the observed range but flags them as extrapolation', async () => {
+    const id = await requestFit(studyId, {
+      method: 'price-ladder',
+      ...commonSpec,
+      priceGrid: { from: 400, to: 4000, steps: 10 },
+    });
+    const [row] = await settled([id]);
+    const result = row.result as NonNullable<FitResource['result']>;
+    const flagged = result.schedule!.rows.filter((r) => r.extrapolated).map((r) => r.price);
+    const grid = Array.from({ length: 10 }, (_, k) => 400 + 400 * k);
+    // The ladder asked 800 to 2600 KES (the demo questionnaire), so the rest is extrapolation.
+    expect(flagged).toEqual(grid.filter((p) => p < 800 || p > 2600));
+    expect(result.warnings.some((w) => w.includes('extrapolation'))).toBe(true);
+  });
+});
