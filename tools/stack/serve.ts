@@ -23,7 +23,11 @@ async function main() {
     'fieldcurve',
   );
   let stopServer = async () => {};
+  let stopping = false;
+  // Ctrl-C reaches the server too, whose exit then asks for a stop again: stop once.
   const stopAll = async (code: number) => {
+    if (stopping) return;
+    stopping = true;
     log('stopping…');
     await stopServer();
     await stack.stop();
