@@ -3,25 +3,34 @@ import type { InterviewStatus } from '@shared/interviews/interview-status';
 import type { Executor } from '../db/database';
 import { decideOnExisting } from './existing-decision';
 import { loadExistingInterviews } from './existing-interviews';
-import { insertInterviewRows } from './insert-rows';
+import type { InterviewInsert, PhotoInsert } from './interview-row';
 import { resubmit } from './resubmit-interview';
 import type { PlannedItem, StoredItem as Stored } from './plan-sync-batch';
 import { rejection, type Rejection } from './sync-rejection';
 
 /**
- * Writes a planned batch and answers each item. New interviews go in with one multi-row
- * INSERT … ON CONFLICT (id) DO NOTHING: an id that a concurrent request stored first is then
- * judged against what it stored (duplicate or conflict), exactly as if it had been there before.
- * Corrections of returned interviews take more statements: the caller runs those in a
- * transaction.
+ * Stores new interviews and the photo rows they declare, atomically; answers the ids it stored.
+ * An id a concurrent request stored first is left out of the answer (and not written).
+ */
+export type NewRowWriter = (
+  rows: readonly InterviewInsert[],
+  photos: readonly PhotoInsert[],
+) => Promise<string[]>;
+
+/**
+ * Writes a planned batch and answers each item. New interviews go in through `writeNew` in one
+ * atomic step; an id that a concurrent request stored first is then judged against what it
+ * stored (duplicate or conflict), exactly as if it had been there before. Corrections of
+ * returned interviews take more statements: the caller runs those in a transaction.
  */
 export async function storeSyncBatch(
   tx: Executor,
   plan: readonly PlannedItem[],
   enumeratorId: string,
+  writeNew: NewRowWriter,
 ): Promise<SyncItemResult[]> {
   const inserts = plan.filter((item): item is Stored => item.kind === 'insert');
-  const lost = await insertNew(tx, inserts);
+  const lost = await insertNew(writeNew, inserts);
   const lostDecisions = await judgeLost(tx, lost, enumeratorId);
   const results: SyncItemResult[] = [];
   for (const item of plan) {
@@ -49,10 +58,11 @@ export async function storeSyncBatch(
 }
 
 /** Inserts the new interviews and their photo rows; answers the ones someone stored first. */
-async function insertNew(tx: Executor, inserts: readonly Stored[]): Promise<Stored[]> {
+async function insertNew(writeNew: NewRowWriter, inserts: readonly Stored[]): Promise<Stored[]> {
+  if (inserts.length === 0) return [];
   const rows = inserts.map((item) => item.row);
   const photos = inserts.flatMap((item) => item.photos);
-  const done = new Set(await insertInterviewRows(tx, rows, photos));
+  const done = new Set(await writeNew(rows, photos));
   return inserts.filter((item) => !done.has(item.id));
 }
 

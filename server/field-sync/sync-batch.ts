@@ -2,19 +2,21 @@ import type { SyncBatchResult } from '@shared/field-sync/sync-batch';
 import type { Actor } from '../auth/actor';
 import type { Database } from '../db/database';
 import { batchKeys } from './batch-keys';
+import { copyInterviewRows } from './copy-interview-rows';
 import { loadEnumeratorScope } from './enumerator-scope';
 import { loadExistingInterviews, loadPhotoOwners } from './existing-interviews';
+import { insertInterviewRows } from './insert-rows';
 import { planSyncBatch } from './plan-sync-batch';
 import type { PublishedVersionCache } from './published-versions';
 import { loadRespondentMatches } from './respondent-matches';
-import { storeSyncBatch } from './store-sync-batch';
+import { storeSyncBatch, type NewRowWriter } from './store-sync-batch';
 
 /**
  * Accepts a device's batch: reads what the checks need in a handful of queries, decides each
- * interview on its own, then writes all accepted ones in ONE transaction (one statement when
- * there are only new interviews). A server killed midway leaves nothing of the batch; sending
- * it again gives the same answers (duplicates for what was stored), so a batch is never stored
- * twice or half.
+ * interview on its own, then writes all accepted ones in ONE transaction (a single COPY when
+ * there are only new interviews without photos). A server killed midway leaves nothing of the
+ * batch; sending it again gives the same answers (duplicates for what was stored), so a batch
+ * is never stored twice or half.
  */
 export async function syncBatch(
   db: Database,
@@ -40,10 +42,23 @@ export async function syncBatch(
     respondentMatches,
     receivedAt,
   });
-  // New interviews go in with a single statement, atomic on its own; corrections take several.
+  // New interviews go in with one COPY (falling back to INSERT … ON CONFLICT when an id was
+  // taken meanwhile); corrections take several statements, so a batch with one runs in a
+  // transaction.
   const corrections = plan.some((item) => item.kind === 'resubmit');
   const results = corrections
-    ? await db.transaction((tx) => storeSyncBatch(tx, plan, actor.userId))
-    : await storeSyncBatch(db, plan, actor.userId);
+    ? await db.transaction((tx) =>
+        storeSyncBatch(tx, plan, actor.userId, (rows, photos) =>
+          insertInterviewRows(tx, rows, photos),
+        ),
+      )
+    : await storeSyncBatch(db, plan, actor.userId, copyOrInsert(db));
   return { results, receivedAt: receivedAt.toISOString() };
+}
+
+/** The fast COPY path, or, when a concurrent request took one of the ids, the judging INSERT. */
+function copyOrInsert(db: Database): NewRowWriter {
+  return async (rows, photos) =>
+    (await copyInterviewRows(db.$client, rows, photos)) ??
+    (await insertInterviewRows(db, rows, photos));
 }

@@ -286,6 +286,60 @@ describe('ids that are already taken', () => {
   });
 });
 
+describe('storing exactly what was sent', () => {
+  it('keeps text with backslashes, tabs, line breaks, quotes and emoji as it was typed', async () => {
+    const awkward = 'C:\\stall\\7\tprice "150"\nsecond line\r\nthird \\N \\t 🪔 ünïcode';
+    const interview = fieldInterview(setup);
+    const sent = { ...interview, answers: { ...interview.answers, remarks: { value: awkward } } };
+    const [result] = await sync(setup.agents.enumerator, [sent]);
+    expect(result.outcome).toBe('accepted');
+    const [row] = await db.select().from(interviews).where(eq(interviews.id, sent.id));
+    expect(row.answers).toEqual(sent.answers);
+    expect(row.respondentKey).toBe(sent.respondentKey);
+    expect(row.startedAt.toISOString()).toBe(new Date(sent.startedAt).toISOString());
+  });
+
+  it('answers duplicates when another request stored the same batch first, mid-write', async () => {
+    // Both requests check the batch before either has stored it; the study row held here keeps
+    // the first one's write open until the second is waiting on the same ids, so the second
+    // finds them taken only while writing and must fall back to judging them one by one.
+    const batch = [fieldInterview(setup), fieldInterview(setup)];
+    const lock = await db.$client.connect();
+    let answers: SyncItemResult[][];
+    try {
+      await lock.query('begin');
+      await lock.query('select 1 from studies where id = $1 for update', [setup.studyId]);
+      const requests = [0, 1].map(() => sync(setup.agents.enumerator, batch));
+      for (let waited = 0; ; waited += 20) {
+        const writing = await db.$client.query(
+          `select 1 from pg_stat_activity
+           where wait_event_type = 'Lock' and query ilike 'copy interviews %'`,
+        );
+        if (writing.rowCount === 2) break;
+        if (waited > 10_000) throw new Error('the two writes never met');
+        await new Promise((r) => setTimeout(r, 20));
+      }
+      await lock.query('rollback');
+      answers = await Promise.all(requests);
+    } finally {
+      await lock.query('rollback').catch(() => undefined);
+      lock.release();
+    }
+    const outcomes = answers.map((results) => results.map((r) => r.outcome).join(',')).sort();
+    expect(outcomes).toEqual(['accepted,accepted', 'duplicate,duplicate']);
+    const stored = await db
+      .select({ id: interviews.id })
+      .from(interviews)
+      .where(
+        inArray(
+          interviews.id,
+          batch.map((i) => i.id),
+        ),
+      );
+    expect(stored).toHaveLength(2);
+  });
+});
+
 describe('the batch envelope', () => {
   it('refuses more than 200 interviews as a whole, naming the list', async () => {
     const response = await setup.agents.enumerator.post('/api/field/sync', {

@@ -101,8 +101,8 @@ async function killAtRandom(server: RunningServer, batch: FieldInterview[], wind
 }
 
 /**
- * Kills the server while its INSERT of the batch is inside PostgreSQL: the test holds a lock on
- * the study row that the insert's foreign-key check waits for, kills the server there, lets
+ * Kills the server while its COPY of the batch is inside PostgreSQL: the test holds a lock on
+ * the study row that the statement's reference check waits for, kills the server there, lets
  * go, and waits for the orphaned statement's backend to end. Answers how much of the batch was
  * stored then: all of it (the statement finished and committed on its own) or none — never part.
  */
@@ -116,11 +116,11 @@ async function killDuringInsert(server: RunningServer, batch: FieldInterview[]) 
     await until(async () => {
       const waiting = await db.$client.query<{ pid: number }>(
         `select pid from pg_stat_activity where wait_event_type = 'Lock'
-           and query ilike '%insert into interviews%' and query ilike '%jsonb_to_recordset%'`,
+           and query ilike 'copy interviews %'`,
       );
       blocked = waiting.rows[0]?.pid;
       return blocked !== undefined;
-    }, 'the server’s insert to reach the lock');
+    }, 'the server’s COPY to reach the lock');
     await killHard(server);
     await attempt;
   } finally {
@@ -168,7 +168,7 @@ it('stores every interview exactly once when the server is killed mid-batch agai
       if (round % 2 === 1) {
         const stored = await killDuringInsert(server, batch);
         expect([0, batchSize]).toContain(stored);
-        notes.push(`killed inside the INSERT (${stored} of ${batchSize} stored by then)`);
+        notes.push(`killed inside the COPY (${stored} of ${batchSize} stored by then)`);
       } else {
         const cut = await killAtRandom(server, batch, window);
         notes.push(`killed at random ${cut ? 'before' : 'after'} the answer`);

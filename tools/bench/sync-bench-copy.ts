@@ -28,30 +28,27 @@ export function exportInterviewRows(databaseUrl: string, studyId: string): Promi
   ]);
 }
 
-/** The foreign keys of `interviews` that sync pays for on every row (see drizzle/). */
-const interviewForeignKeys = [
-  'add foreign key (study_id) references studies (id)',
-  'add foreign key (questionnaire_version_id) references questionnaire_versions (id)',
-  'add foreign key (route_id) references routes (id)',
-  'add foreign key (point_id) references sampling_points (id)',
-  'add foreign key (enumerator_id) references users (id)',
-].join(', ');
+/** The reference checks that every statement storing interviews pays for (drizzle/0007). */
+const referenceChecks = `create trigger bench_interviews_copy_references
+  after insert on bench_interviews_copy referencing new table as added
+  for each statement execute function check_interview_references()`;
 
 /**
  * The ceiling: the same rows loaded with one client-side `COPY … FROM STDIN` into a copy of the
- * interviews table (same columns, defaults, primary key and indexes). `LIKE` copies no foreign
- * keys; with `withForeignKeys` the copy gets the ones sync's inserts are checked against, to show
- * what they cost. Answers the seconds psql's `\\timing` reports for the COPY (not the connection).
+ * interviews table (same columns, defaults, primary key and indexes). `LIKE` copies no
+ * triggers; with `withReferenceChecks` the copy gets the statement-level reference check that
+ * sync's writes pass, to show what it costs. Answers the seconds psql's `\\timing` reports for
+ * the COPY (not the connection).
  */
 export async function timeCopy(
   databaseUrl: string,
   rows: string,
-  withForeignKeys = false,
+  withReferenceChecks = false,
 ): Promise<number> {
   const setup = [
     'drop table if exists bench_interviews_copy',
     'create table bench_interviews_copy (like interviews including all)',
-    ...(withForeignKeys ? [`alter table bench_interviews_copy ${interviewForeignKeys}`] : []),
+    ...(withReferenceChecks ? [referenceChecks] : []),
   ];
   await psql(databaseUrl, setup);
   try {

@@ -10,10 +10,6 @@ import {
   uuid,
 } from 'drizzle-orm/pg-core';
 import { interviewStatuses } from '@shared/interviews/interview-status';
-import { questionnaireVersions } from './questionnaires';
-import { samplingPoints } from './sampling-points';
-import { routes } from './routes';
-import { studies } from './studies';
 import { users } from './users';
 
 export const interviewStatusEnum = pgEnum('interview_status', interviewStatuses);
@@ -26,15 +22,15 @@ export const interviews = pgTable(
   'interviews',
   {
     id: uuid().primaryKey(),
-    studyId: uuid()
-      .notNull()
-      .references(() => studies.id, { onDelete: 'cascade' }),
-    questionnaireVersionId: uuid()
-      .notNull()
-      .references(() => questionnaireVersions.id, { onDelete: 'restrict' }),
-    routeId: uuid().references(() => routes.id, { onDelete: 'set null' }),
-    pointId: uuid().references(() => samplingPoints.id, { onDelete: 'set null' }),
-    enumeratorId: uuid().references(() => users.id, { onDelete: 'set null' }),
+    // The five references below are checked once per statement, not per row: see
+    // drizzle/0007_interview_reference_checks.sql. Sync stores interviews hundreds at a time,
+    // all pointing at the same few parents, and a row-level foreign key would look up and lock
+    // the same study, version, route and enumerator once for every row.
+    studyId: uuid().notNull(),
+    questionnaireVersionId: uuid().notNull(),
+    routeId: uuid(),
+    pointId: uuid(),
+    enumeratorId: uuid(),
     status: interviewStatusEnum().notNull().default('received'),
     answers: jsonb().notNull(),
     flags: jsonb().notNull().default([]),
