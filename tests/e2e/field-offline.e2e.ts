@@ -20,6 +20,8 @@ const reedbank = { latitude: 1.2346, longitude: 30.9877, accuracy: 8 };
 const quayside = { latitude: 1.2386, longitude: 30.9917, accuracy: 10 };
 /** About 2.4 km from both points: the server flags such an interview as recorded far away. */
 const farAway = { latitude: 1.25, longitude: 31.005, accuracy: 12 };
+/** A phone number as an enumerator might type it; only its hash should reach the server. */
+const phoneAsTyped = '+254 (712) 345-678';
 
 describe('field work with no network', () => {
   let db: Database;
@@ -49,6 +51,9 @@ describe('field work with no network', () => {
 
   const storedInterviews = () =>
     db.select().from(interviews).where(eq(interviews.studyId, study.studyId));
+  /** The device's rule, computed apart with Node's SHA-256: study id, ':', normalised reference. */
+  const phoneKey = () =>
+    createHash('sha256').update(`${study.studyId}:254712345678`, 'utf8').digest('base64url');
 
   it('keeps the assignments on the device after one online sign-in', async () => {
     await signIn(page, 'enumerator@tidewater.test');
@@ -93,6 +98,11 @@ describe('field work with no network', () => {
       ownsLamp: true,
       photo,
       ladder: ['yes', 'no', 'no'],
+      respondentReference: phoneAsTyped,
+      onConsentScreen: async () => {
+        await screenshot(page, 'field-runner-consent-360');
+        await expectNoSeriousViolations(page, 'the consent screen with the respondent reference');
+      },
       interruptAfterOwnership: async () => {
         const interviewUrl = page.url();
         await page.close();
@@ -133,6 +143,12 @@ describe('field work with no network', () => {
     );
     expect(recordedFar).toHaveLength(1);
     expect(recordedFar[0].status).toBe('flagged');
+    // Typed before the tab was closed, kept through the resume as its hash alone.
+    expect(recordedFar[0].respondentKey).toBe(phoneKey());
+    expect(rows.filter((row) => row.respondentKey !== null)).toHaveLength(1);
+    for (const typed of ['(712)', '345-678', '254712345678']) {
+      expect(sentBatches.join('')).not.toContain(typed);
+    }
 
     const photos = await db
       .select()
@@ -217,5 +233,7 @@ describe('field work with no network', () => {
     );
     expect(statuses).not.toContain('returned');
     expect(statuses).toHaveLength(3);
+    const keys = (await storedInterviews()).map((row) => row.respondentKey);
+    expect(keys.filter((key) => key !== null)).toEqual([phoneKey()]);
   }, 180_000);
 });

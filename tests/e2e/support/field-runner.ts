@@ -8,6 +8,9 @@ export interface FieldInterviewScript {
   ownsLamp: boolean;
   photo?: Buffer;
   ladder: ('yes' | 'no')[];
+  /** Typed in the respondent reference beside consent; the device keeps only its hash. */
+  respondentReference?: string;
+  onConsentScreen?: () => Promise<void>;
   /** A returned interview: every answer is already there, only Next is pressed. */
   correcting?: boolean;
   onPhotoScreen?: () => Promise<void>;
@@ -40,6 +43,11 @@ export async function runFieldInterview(
   }
   await screen(page, 'consent');
   if (fresh) await page.getByRole('radio', { name: 'Agrees to take part' }).check();
+  if (fresh && script.respondentReference) {
+    await page.getByLabel('Respondent reference (optional)').fill(script.respondentReference);
+    await page.getByText('Kept as a one-way code.').waitFor();
+  }
+  await script.onConsentScreen?.();
   await next(page);
   await screen(page, 'owns-lamp');
   if (fresh) {

@@ -17,9 +17,10 @@ import { reviewActionSchema, type ReviewAction } from '@shared/field-sync/review
 import type { Study } from '@shared/studies/study';
 import { readApiProblem } from '../../core/api-problem';
 import { describeAnswer } from './answer-summary';
+import { FlagDetail } from './flag-detail';
 import { PositionPlot } from './position-plot';
 import { ReviewApi } from './review-api';
-import { flagDetail, formatDuration, statusLabels } from './review-words';
+import { formatDuration, statusLabels } from './review-words';
 
 const actionWords: Record<ReviewAction, string> = {
   accept: 'Accepted.',
@@ -30,7 +31,7 @@ const actionWords: Record<ReviewAction, string> = {
 /** One interview under review: answers per block, flags, positions, photos, and the decision. */
 @Component({
   selector: 'app-interview-review-page',
-  imports: [DatePipe, MatButton, MatCardModule, MatIcon, PositionPlot, RouterLink],
+  imports: [DatePipe, FlagDetail, MatButton, MatCardModule, MatIcon, PositionPlot, RouterLink],
   templateUrl: './interview-review-page.html',
   styleUrl: './interview-review-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -48,7 +49,6 @@ export class InterviewReviewPage {
   protected readonly done = signal<string | null>(null);
   protected readonly sending = signal(false);
   protected readonly statusLabels = statusLabels;
-  protected readonly flagDetail = flagDetail;
   protected readonly formatDuration = formatDuration;
 
   protected readonly answers = computed(() => {
@@ -74,6 +74,11 @@ export class InterviewReviewPage {
   constructor() {
     effect(() => {
       const [studyId, interviewId] = [this.studyId(), this.interviewId()];
+      // A flag links to another interview on this same page: start its decision afresh.
+      this.done.set(null);
+      this.note.set('');
+      this.noteProblem.set(null);
+      this.problem.set(null);
       this.api
         .study(studyId)
         .subscribe({ next: (study) => this.study.set(study), error: () => undefined });

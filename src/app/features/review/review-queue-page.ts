@@ -9,12 +9,13 @@ import type { ReviewQueue } from '@shared/field-sync/review-queue';
 import { interviewStatuses, type InterviewStatus } from '@shared/interviews/interview-status';
 import { readApiProblem } from '../../core/api-problem';
 import { ReviewApi } from './review-api';
-import { flagDetail, formatDuration, statusLabels } from './review-words';
+import { FlagDetail } from './flag-detail';
+import { formatDuration, statusLabels } from './review-words';
 
 /** A study's interviews to review: flagged first, with what each flag found. */
 @Component({
   selector: 'app-review-queue-page',
-  imports: [DatePipe, MatButton, MatCardModule, MatIcon, MatProgressBar, RouterLink],
+  imports: [DatePipe, FlagDetail, MatButton, MatCardModule, MatIcon, MatProgressBar, RouterLink],
   templateUrl: './review-queue-page.html',
   styleUrl: './review-queue-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -25,7 +26,6 @@ export class ReviewQueuePage {
   readonly studyId = input.required<string>();
   protected readonly statuses = interviewStatuses;
   protected readonly statusLabels = statusLabels;
-  protected readonly flagDetail = flagDetail;
   protected readonly formatDuration = formatDuration;
   protected readonly status = signal<InterviewStatus | null>(null);
   protected readonly queue = signal<ReviewQueue | null>(null);

@@ -27,10 +27,13 @@ export function flagDetail(flag: QualityFlag): string {
         .map((v) => `${v.lower} above ${v.higher}`)
         .join(', ')}`;
     case 'duplicate-respondent':
-      return `${label} (${flag.otherInterviewIds.length} other interview${
-        flag.otherInterviewIds.length === 1 ? '' : 's'
-      })`;
+      return `${label}: same respondent as ${flag.otherInterviewIds.map(interviewReference).join(', ')}`;
   }
+}
+
+/** An interview named in words by the first group of its id, as supervisors quote it. */
+export function interviewReference(id: string): string {
+  return `interview ${id.slice(0, 8)}`;
 }
 
 /** Metres below a kilometre, kilometres with one decimal above. */

@@ -28,6 +28,12 @@ export interface DraftInterview {
   /** The bid drawn for each dichotomous-choice block, kept so a resumed interview asks the same. */
   bids: Record<string, BidLevel>;
   gps: GpsFix | null;
+  /**
+   * The one-way code of the respondent reference the enumerator typed (`respondentKeyFor`);
+   * the typed text itself is never stored. Null when none was given; absent on drafts saved
+   * before the device asked for one.
+   */
+  respondentKey?: string | null;
   /** When this is the correction of a returned interview: the `reviewedAt` of that return. */
   returnedAt: string | null;
   updatedAt: string;

@@ -36,6 +36,7 @@ export function finishedInterview(
     answers,
     photos,
     ...gpsOf(blocks, answers, draft.gps),
+    ...(draft.respondentKey ? { respondentKey: draft.respondentKey } : {}),
     ...(draft.returnedAt ? { returnedAt: draft.returnedAt } : {}),
   };
   const unusedPhotoIds = [...manifest.keys()].filter((id) => !used.includes(id));

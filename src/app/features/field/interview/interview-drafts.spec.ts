@@ -63,6 +63,35 @@ describe('InterviewDrafts', () => {
     });
   });
 
+  it('resumes with the respondent key, and finishes with it in the outbox', async () => {
+    const key = 'AjTJgt69nqxTRPTEPVYld2BNyBC9vAdiv96hqFIfKuE';
+    const draft = await drafts.start(place);
+    expect(draft.respondentKey).toBeNull();
+    await drafts.saveRespondentKey(draft.id, key);
+    await drafts.saveAnswer(draft.id, 'consent', { agreed: true }, 1);
+    store.db.close();
+    const reopened = new FieldDb(userId);
+    expect((await reopened.drafts.get(draft.id))?.respondentKey).toBe(key);
+    reopened.close();
+    await store.db.open();
+    await drafts.saveAnswer(draft.id, 'bid', { bidMinor: 100, firstResponse: 'yes' }, 2);
+    await drafts.saveAnswer(draft.id, 'count', { value: 3 }, 3);
+    const entry = await drafts.finish(draft.id, version);
+    expect(entry.interview.respondentKey).toBe(key);
+    const corrected = await drafts.reopen(entry, version, '2027-03-02T10:00:00Z');
+    expect(corrected.respondentKey).toBe(key);
+  });
+
+  it('removes the respondent key when the reference is cleared', async () => {
+    const draft = await drafts.start(place);
+    await drafts.saveRespondentKey(draft.id, 'AjTJgt69nqxTRPTEPVYld2BNyBC9vAdiv96hqFIfKuE');
+    await drafts.saveRespondentKey(draft.id, null);
+    expect((await drafts.get(draft.id))?.respondentKey).toBeNull();
+    await expect(drafts.saveRespondentKey(crypto.randomUUID(), null)).rejects.toThrow(
+      'no longer on the device',
+    );
+  });
+
   it('keeps the position the device found in the background', async () => {
     const draft = await drafts.start(place);
     await vi.waitFor(async () => expect((await drafts.get(draft.id))?.gps).not.toBeNull());

@@ -36,6 +36,7 @@ export class InterviewDrafts {
       answers: {},
       bids: {},
       gps: null,
+      respondentKey: null,
       returnedAt: null,
       updatedAt: now,
     };
@@ -59,6 +60,15 @@ export class InterviewDrafts {
       else answers[blockId] = answer;
       await db.drafts.put({ ...draft, answers, step, updatedAt: new Date().toISOString() });
     });
+  }
+
+  /** Stores the respondent key made on the device (null removes it); never the typed reference. */
+  async saveRespondentKey(id: string, respondentKey: string | null): Promise<void> {
+    const updated = await this.store.db.drafts.update(id, {
+      respondentKey,
+      updatedAt: new Date().toISOString(),
+    });
+    if (updated === 0) throw new Error('This interview is no longer on the device');
   }
 
   /**
@@ -171,6 +181,7 @@ export class InterviewDrafts {
       answers: { ...interview.answers },
       bids,
       gps: interview.gps ?? null,
+      respondentKey: interview.respondentKey ?? null,
       returnedAt,
       updatedAt: new Date().toISOString(),
     };

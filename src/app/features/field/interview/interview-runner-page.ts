@@ -20,11 +20,12 @@ import { OutboxSync } from '../sync/outbox-sync';
 import { progressPercent, withoutHiddenAnswers } from './interview-flow';
 import { InterviewPhotoStore } from './interview-photo-store';
 import { InterviewSession } from './interview-session';
+import { RespondentReference } from './respondent-reference';
 
 /** The interview runner: one block per screen, consent first, back and forward. */
 @Component({
   selector: 'app-interview-runner-page',
-  imports: [BlockView, MatButton, MatIcon, MatProgressBar],
+  imports: [BlockView, MatButton, MatIcon, MatProgressBar, RespondentReference],
   templateUrl: './interview-runner-page.html',
   styleUrls: ['../field-page.scss', './interview-runner-page.scss'],
   providers: [

@@ -1,5 +1,10 @@
 import { Injectable, computed, inject, signal } from '@angular/core';
 import type { FieldQuestionnaireVersion, FieldStudy } from '@shared/field-sync/field-assignments';
+import {
+  normaliseRespondentReference,
+  respondentKeyFor,
+  respondentReferenceProblem,
+} from '@shared/field-sync/respondent-key';
 import type { BidLevel } from '@shared/questionnaire/bid-design';
 import { validateInterviewAnswers } from '@shared/questionnaire/interview-answers';
 import type { RouteStop } from '@shared/routes/field-route';
@@ -37,12 +42,17 @@ export class InterviewSession {
   readonly issues = signal<readonly AnswerIssue[]>([]);
   readonly bids = signal<Record<string, BidLevel>>({});
   readonly busy = signal(false);
+  /** What is wrong with the respondent reference being typed, if anything. */
+  readonly referenceProblem = signal<string | null>(null);
+  /** Respondent-key writes, chained so the last keystroke's key is the one that stays. */
+  private keyWrites: Promise<void> = Promise.resolve();
 
   readonly blocks = computed(() => this.setting()?.version.definition.blocks ?? []);
   readonly step = computed(() => this.draft()?.step ?? 0);
   readonly answers = computed(() => this.draft()?.answers ?? {});
   readonly block = computed(() => this.blocks()[this.step()] ?? null);
   readonly atEnd = computed(() => this.setting() !== null && this.block() === null);
+  readonly hasRespondentKey = computed(() => Boolean(this.draft()?.respondentKey));
 
   async load(id: string): Promise<void> {
     const draft = await this.drafts.get(id);
@@ -78,20 +88,46 @@ export class InterviewSession {
     if (draft && block) await this.drafts.saveAnswer(draft.id, block.id, answer, draft.step);
   }
 
+  /**
+   * Keeps the one-way code of the respondent reference typed, in place of any before; an empty
+   * or unusable reference removes it, so the draft never holds a key of something half typed.
+   * The typed text stays in the input alone: it is hashed here and dropped.
+   */
+  noteRespondentReference(typed: string): Promise<void> {
+    const draft = this.draft();
+    if (!draft) return Promise.resolve();
+    const problem = respondentReferenceProblem(typed);
+    this.referenceProblem.set(problem);
+    this.issues.set([]);
+    const usable = problem === null && normaliseRespondentReference(typed).length > 0;
+    const write = this.keyWrites.then(async () => {
+      const key = usable ? await respondentKeyFor(draft.studyId, typed) : null;
+      await this.drafts.saveRespondentKey(draft.id, key);
+      this.draft.update((held) => (held?.id === draft.id ? { ...held, respondentKey: key } : held));
+    });
+    this.keyWrites = write.catch(() =>
+      this.referenceProblem.set('Respondent reference: it could not be kept on this device'),
+    );
+    return this.keyWrites;
+  }
+
   /** Checks the answer and moves to the next block asked; 'refused' when consent was declined. */
   async next(): Promise<'moved' | 'invalid' | 'refused'> {
+    await this.keyWrites;
     const draft = this.draft();
     const block = this.block();
     if (!draft || !block) return 'invalid';
     const answer = this.pending();
     const issues = answerIssues(block, answer);
+    if (issues.length === 0 && isRefusal(block, answer)) {
+      await this.drafts.refuse(draft.id);
+      return 'refused';
+    }
+    const referenceProblem = this.referenceProblem();
+    if (referenceProblem) issues.push({ path: 'respondentReference', message: referenceProblem });
     if (issues.length > 0) {
       this.issues.set(issues);
       return 'invalid';
-    }
-    if (isRefusal(block, answer)) {
-      await this.drafts.refuse(draft.id);
-      return 'refused';
     }
     const answers = { ...draft.answers, [block.id]: answer };
     if (answer === undefined) delete answers[block.id];
@@ -124,6 +160,7 @@ export class InterviewSession {
   }
 
   async finish(): Promise<OutboxEntry> {
+    await this.keyWrites;
     const draft = this.draft();
     const setting = this.setting();
     if (!draft || !setting) throw new Error('No interview is open');
@@ -159,6 +196,8 @@ export class InterviewSession {
     const draft = this.draft();
     const block = this.blocks()[step];
     this.issues.set([]);
+    // The reference input belongs to the consent screen; leaving it leaves its problem behind.
+    this.referenceProblem.set(null);
     this.pending.set(block && draft ? draft.answers[block.id] : undefined);
     if (draft && block?.kind === 'dichotomous-choice' && !this.bids()[block.id]) {
       const bid = await this.drafts.bidFor(draft.id, block);
