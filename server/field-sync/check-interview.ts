@@ -1,7 +1,6 @@
 import { fieldInterviewSchema, type FieldInterview } from '@shared/field-sync/field-interview';
 import { photoManifestProblems } from '@shared/field-sync/photo-references';
 import type { LatLng } from '@shared/field-sync/quality/great-circle-distance';
-import { validateInterviewAnswers } from '@shared/questionnaire/interview-answers';
 import type { EnumeratorScope } from './enumerator-scope';
 import type { PublishedVersion } from './published-versions';
 import { rejection, type Rejection } from './sync-rejection';
@@ -88,11 +87,7 @@ function checkAnswers(interview: FieldInterview, version: PublishedVersion): Rej
         : 'The respondent declined; a refusal is not kept as an interview';
     return rejection('no-consent', [{ path: `answers.${consent.id}`, message }]);
   }
-  const problems = validateInterviewAnswers(
-    version.definition,
-    interview.answers,
-    version.schemaFor,
-  );
+  const problems = version.answersCheck.problems(interview.answers);
   if (problems.length > 0) {
     const issues = problems.map((problem) => ({
       path: ['answers', problem.blockId, problem.path].filter(Boolean).join('.'),

@@ -1,7 +1,9 @@
-import { inArray } from 'drizzle-orm';
+import { sql } from 'drizzle-orm';
 import type { InterviewStatus } from '@shared/interviews/interview-status';
 import type { PhotoContentType, PhotoManifestEntry } from '@shared/field-sync/photo-manifest';
+import { anyOf } from '../db/any-of';
 import type { Executor } from '../db/database';
+import { preparedPerExecutor } from '../db/prepared-per-executor';
 import { interviewPhotos, interviews } from '../db/schema';
 import { contentFingerprint } from './interview-content';
 
@@ -22,20 +24,9 @@ export async function loadExistingInterviews(
 ): Promise<Map<string, ExistingInterview>> {
   const found = new Map<string, ExistingInterview>();
   if (ids.length === 0) return found;
-  const rows = await db
-    .select()
-    .from(interviews)
-    .where(inArray(interviews.id, [...ids]));
+  const rows = await interviewsById(db).execute({ ids });
   if (rows.length === 0) return found;
-  const photos = await db
-    .select()
-    .from(interviewPhotos)
-    .where(
-      inArray(
-        interviewPhotos.interviewId,
-        rows.map((row) => row.id),
-      ),
-    );
+  const photos = await photosOfInterviews(db).execute({ ids: rows.map((row) => row.id) });
   for (const row of rows) {
     const manifest: PhotoManifestEntry[] = photos
       .filter((photo) => photo.interviewId === row.id)
@@ -73,9 +64,30 @@ export async function loadPhotoOwners(
   photoIds: readonly string[],
 ): Promise<Map<string, string>> {
   if (photoIds.length === 0) return new Map();
-  const rows = await db
-    .select({ id: interviewPhotos.id, interviewId: interviewPhotos.interviewId })
-    .from(interviewPhotos)
-    .where(inArray(interviewPhotos.id, [...photoIds]));
+  const rows = await photoOwners(db).execute({ ids: photoIds });
   return new Map(rows.map((row) => [row.id, row.interviewId]));
 }
+
+const interviewsById = preparedPerExecutor((db) =>
+  db
+    .select()
+    .from(interviews)
+    .where(anyOf(interviews.id, sql.placeholder('ids'), 'uuid'))
+    .prepare('field_sync_interviews_by_id'),
+);
+
+const photosOfInterviews = preparedPerExecutor((db) =>
+  db
+    .select()
+    .from(interviewPhotos)
+    .where(anyOf(interviewPhotos.interviewId, sql.placeholder('ids'), 'uuid'))
+    .prepare('field_sync_photos_of_interviews'),
+);
+
+const photoOwners = preparedPerExecutor((db) =>
+  db
+    .select({ id: interviewPhotos.id, interviewId: interviewPhotos.interviewId })
+    .from(interviewPhotos)
+    .where(anyOf(interviewPhotos.id, sql.placeholder('ids'), 'uuid'))
+    .prepare('field_sync_photo_owners'),
+);

@@ -55,16 +55,12 @@ export function planSyncBatch(items: readonly unknown[], facts: BatchFacts): Pla
   const batchRespondents = new Map<string, string[]>();
   return items.map((raw, index): PlannedItem => {
     const checked = checkInterview(raw, facts);
-    const rejected = (r: Rejection): PlannedItem => ({
-      kind: 'rejected',
-      index,
-      id: rawIdOf(raw),
-      rejection: r,
-    });
-    if (!('interview' in checked)) return rejected(checked);
+    if (!('interview' in checked)) return rejectedItem(index, raw, checked);
     const { interview } = checked;
     if (seenIds.has(interview.id)) {
-      return rejected(
+      return rejectedItem(
+        index,
+        raw,
         rejection('repeated-in-batch', [
           { path: 'id', message: 'An earlier item of this batch has this id' },
         ]),
@@ -72,17 +68,16 @@ export function planSyncBatch(items: readonly unknown[], facts: BatchFacts): Pla
     }
     seenIds.add(interview.id);
     const photoProblem = photoClaims(checked, facts.photoOwners, claimedPhotos);
-    if (photoProblem) return rejected(photoProblem);
-    const fingerprint = () => fingerprintOf(checked);
+    if (photoProblem) return rejectedItem(index, raw, photoProblem);
     const existing = facts.existing.get(interview.id);
     let kind: 'insert' | 'resubmit' = 'insert';
     if (existing) {
       const decision = decideOnExisting(existing, {
         ...interview,
         enumeratorId: facts.enumeratorId,
-        fingerprint: fingerprint(),
+        fingerprint: fingerprintOf(checked),
       });
-      if (decision.kind === 'rejected') return rejected(decision.rejection);
+      if (decision.kind === 'rejected') return rejectedItem(index, raw, decision.rejection);
       if (decision.kind === 'duplicate')
         return { kind: 'duplicate', index, id: interview.id, status: decision.status };
       kind = 'resubmit';
@@ -94,9 +89,17 @@ export function planSyncBatch(items: readonly unknown[], facts: BatchFacts): Pla
       id: interview.id,
       row,
       photos: photoRows(interview.id, interview.photos),
-      fingerprint,
+      // A method, not an arrow: tsx (which runs the server) names each arrow function it
+      // creates, a costly defineProperty for each of thousands of items.
+      fingerprint() {
+        return fingerprintOf(checked);
+      },
     };
   });
+}
+
+function rejectedItem(index: number, raw: unknown, why: Rejection): PlannedItem {
+  return { kind: 'rejected', index, id: rawIdOf(raw), rejection: why };
 }
 
 /** A photo id may belong to one interview only, across the store and the batch. */
@@ -125,12 +128,15 @@ function acceptedRow(
   let sameRespondentIds: string[] = [];
   if (interview.respondentKey) {
     const slot = respondentSlot(interview.studyId, interview.respondentKey);
-    const earlier = [
-      ...(facts.respondentMatches.get(slot) ?? []),
-      ...(batchRespondents.get(slot) ?? []),
-    ];
-    sameRespondentIds = [...new Set(earlier)].filter((id) => id !== interview.id);
-    batchRespondents.set(slot, [...(batchRespondents.get(slot) ?? []), interview.id]);
+    const stored = facts.respondentMatches.get(slot);
+    const earlier = batchRespondents.get(slot);
+    if (stored || earlier) {
+      const others = new Set([...(stored ?? []), ...(earlier ?? [])]);
+      others.delete(interview.id);
+      sameRespondentIds = [...others];
+    }
+    if (earlier) earlier.push(interview.id);
+    else batchRespondents.set(slot, [interview.id]);
   }
   const flags = interviewQualityFlags({
     definition: version.definition,

@@ -1,7 +1,5 @@
 import { and, eq, inArray } from 'drizzle-orm';
-import type { z } from 'zod';
-import { answerSchemaFor } from '@shared/questionnaire/answer-schema';
-import type { Block } from '@shared/questionnaire/block';
+import { prepareAnswersCheck, type AnswersCheck } from '@shared/questionnaire/answers-check';
 import type { QuestionnaireDefinition } from '@shared/questionnaire/questionnaire-definition';
 import type { Executor } from '../db/database';
 import { questionnaireVersions, questionnaires } from '../db/schema';
@@ -11,27 +9,29 @@ export interface PublishedVersion {
   id: string;
   studyId: string;
   definition: QuestionnaireDefinition;
-  /** Each block's answer schema, built once for every interview checked against the version. */
-  readonly schemaFor: (block: Block) => z.ZodType;
+  /** The check of an interview's answers, prepared once for every interview of the version. */
+  readonly answersCheck: AnswersCheck;
 }
 
-/** Builds the version's answer schemas up front (zod compiles a schema on its first use). */
+/**
+ * Prepares the version's answer check up front: its schemas (zod compiles a schema on its
+ * first use), quick tests and condition targets.
+ */
 export function publishedVersion(
   row: Pick<PublishedVersion, 'id' | 'studyId'> & { definition: unknown },
 ): PublishedVersion {
   const definition = row.definition as QuestionnaireDefinition;
-  const schemas = new Map(definition.blocks.map((block) => [block.id, answerSchemaFor(block)]));
   return {
     id: row.id,
     studyId: row.studyId,
     definition,
-    schemaFor: (block) => schemas.get(block.id) ?? answerSchemaFor(block),
+    answersCheck: prepareAnswersCheck(definition),
   };
 }
 
 /**
  * Published versions never change (a database trigger refuses it), so once read they are kept,
- * answer schemas built, for the life of the process: a batch of 200 interviews on one version
+ * answer checks prepared, for the life of the process: a batch of 200 interviews on one version
  * costs no lookup and no schema building after the first. Drafts and unknown ids are not kept,
  * so a later publication is seen.
  */

@@ -62,16 +62,19 @@ export const fieldInterviewSchema = z
         message: 'The interview cannot end before it started',
       });
     }
-    const seen = new Set<string>();
-    interview.photos.forEach((photo, index) => {
-      if (seen.has(photo.photoId)) {
-        ctx.addIssue({
-          code: 'custom',
-          path: ['photos', index, 'photoId'],
-          message: 'This photo is listed twice',
-        });
-      }
-      seen.add(photo.photoId);
-    });
+    // Most interviews have no photo or one: no set to build for them.
+    if (interview.photos.length > 1) {
+      const seen = new Set<string>();
+      interview.photos.forEach((photo, index) => {
+        if (seen.has(photo.photoId)) {
+          ctx.addIssue({
+            code: 'custom',
+            path: ['photos', index, 'photoId'],
+            message: 'This photo is listed twice',
+          });
+        }
+        seen.add(photo.photoId);
+      });
+    }
   });
 export type FieldInterview = z.infer<typeof fieldInterviewSchema>;

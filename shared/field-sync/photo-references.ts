@@ -35,6 +35,7 @@ export function photoManifestProblems(
   manifest: readonly { photoId: string }[],
 ): { path: string; message: string }[] {
   const references = photoReferences(blocks, answers);
+  if (references.length === 0 && manifest.length === 0) return [];
   const declared = new Set(manifest.map((photo) => photo.photoId));
   const referenced = new Set(references.map((ref) => ref.photoId));
   const problems = references

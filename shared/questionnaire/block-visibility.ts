@@ -1,5 +1,6 @@
 import type { InterviewAnswers } from './answer';
 import type { Block } from './block';
+import type { SkipCondition } from './skip-condition';
 import { skipSubjectOf } from './skip-targets';
 
 /**
@@ -15,7 +16,19 @@ export function isBlockShown(
   const condition = block.showIf;
   if (!condition) return true;
   const target = blocks.find((b) => b.id === condition.blockId);
-  const answer = answers[condition.blockId];
+  return conditionHolds(condition, target, answers[condition.blockId]);
+}
+
+/**
+ * Whether a skip condition holds for `answer`, the answer to its `target` block (undefined when
+ * that block was not answered, or the questionnaire has no such block). A caller checking many
+ * interviews finds the target once; `isBlockShown` finds it on every call.
+ */
+export function conditionHolds(
+  condition: SkipCondition,
+  target: Block | undefined,
+  answer: unknown,
+): boolean {
   if (!target || answer === undefined) return false;
   if (condition.test === 'answered') return true;
   const subject = skipSubjectOf(target, answer);

@@ -158,6 +158,14 @@ describe('POST /api/field/sync with bad items among good ones', () => {
     ],
     ['an id that is not a UUID', (g) => ({ ...g, id: 'interview-1' }), 'invalid-interview', 'id'],
     [
+      // Looked up (as one array parameter) before the item is checked: the quotes, braces,
+      // comma and backslash must reach PostgreSQL as text, not break the batch's query.
+      'a respondent key that is not a hash',
+      (g) => ({ ...g, respondentKey: 'Amina "A", {Lakeshore}\\ NULL' }),
+      'invalid-interview',
+      'respondentKey',
+    ],
+    [
       'an end before the start',
       (g) => ({ ...g, finishedAt: '2020-01-01T00:00:00Z' }),
       'invalid-interview',

@@ -28,11 +28,13 @@ export function thresholdOrderFlags(
     const answer = answers[block.id] as PriceThresholdsAnswer | undefined;
     if (!answer) continue;
     const violations: { lower: ThresholdField; higher: ThresholdField }[] = [];
-    ordered.forEach((lower, i) => {
-      for (const higher of ordered.slice(i + 1)) {
+    for (let i = 0; i < ordered.length; i++) {
+      for (let j = i + 1; j < ordered.length; j++) {
+        const lower = ordered[i];
+        const higher = ordered[j];
         if (answer[lower] > answer[higher]) violations.push({ lower, higher });
       }
-    });
+    }
     if (violations.length > 0) {
       flags.push({ kind: 'thresholds-out-of-order', blockId: block.id, violations });
     }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
 /**
@@ -22,3 +23,11 @@ export function consentAnswerSchema(_block: ConsentBlock) {
   return z.strictObject({ agreed: z.boolean({ error: 'Record whether they agreed' }) });
 }
 export type ConsentAnswer = z.infer<ReturnType<typeof consentAnswerSchema>>;
+
+const consentKeys = ['agreed'];
+
+/** The quick test of a consent answer (see `answerFitsFor`). */
+export function consentAnswerFits(_block: ConsentBlock) {
+  return (answer: unknown) =>
+    isRecordWith(answer, consentKeys) && typeof answer['agreed'] === 'boolean';
+}

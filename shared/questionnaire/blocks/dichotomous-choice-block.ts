@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 import { bidDesignSchema, checkBidDesign } from '../bid-design';
 
@@ -54,4 +55,28 @@ export interface DichotomousChoiceAnswer {
   firstResponse: 'yes' | 'no';
   followUpMinor?: number;
   secondResponse?: 'yes' | 'no';
+}
+
+const singleKeys = ['bidMinor', 'firstResponse'];
+const doubleKeys = [...singleKeys, 'followUpMinor', 'secondResponse'];
+const isYesNo = (value: unknown) => value === 'yes' || value === 'no';
+
+/** The quick test of a dichotomous-choice answer (see `answerFitsFor`). */
+export function dichotomousChoiceAnswerFits(block: DichotomousChoiceBlock) {
+  const levels = new Map(block.bidDesign.levels.map((level) => [level.bidMinor, level]));
+  const double = block.bounds === 'double';
+  return (answer: unknown) => {
+    if (!isRecordWith(answer, double ? doubleKeys : singleKeys)) return false;
+    const bid = answer['bidMinor'];
+    const first = answer['firstResponse'];
+    if (!Number.isSafeInteger(bid) || !isYesNo(first)) return false;
+    const level = levels.get(bid as number);
+    if (!level) return false;
+    if (!double) return true;
+    const followUp = answer['followUpMinor'];
+    const expected = first === 'yes' ? level.afterYesMinor : level.afterNoMinor;
+    return (
+      Number.isSafeInteger(followUp) && followUp === expected && isYesNo(answer['secondResponse'])
+    );
+  };
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
 /** Household size: how many people live and eat together, up to `maxPeople`. */
@@ -19,3 +20,11 @@ export function householdSizeAnswerSchema(block: HouseholdSizeBlock) {
   });
 }
 export type HouseholdSizeAnswer = z.infer<ReturnType<typeof householdSizeAnswerSchema>>;
+
+const householdSizeKeys = ['people'];
+
+/** The quick test of a household-size answer (see `answerFitsFor`). */
+export function householdSizeAnswerFits(block: HouseholdSizeBlock) {
+  return (answer: unknown) =>
+    isRecordWith(answer, householdSizeKeys) && isWholeBetween(answer['people'], 1, block.maxPeople);
+}

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { nonNegativeMinorSchema } from '../../money/minor-amount';
+import { isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 import { choiceOptionSchema, requireDistinctOptions } from '../choice-option';
 
@@ -66,4 +67,17 @@ export function incomeBandAnswerSchema(block: IncomeBandBlock) {
 }
 export interface IncomeBandAnswer {
   band: string | null;
+}
+
+const incomeBandKeys = ['band'];
+
+/** The quick test of an income-band answer (see `answerFitsFor`). */
+export function incomeBandAnswerFits(block: IncomeBandBlock) {
+  const values = new Set(block.bands.map((b) => b.value));
+  return (answer: unknown) => {
+    if (!isRecordWith(answer, incomeBandKeys)) return false;
+    const band = answer['band'];
+    if (band === null) return block.allowDecline;
+    return typeof band === 'string' && values.has(band);
+  };
 }

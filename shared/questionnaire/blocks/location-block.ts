@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isNumberBetween, isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
 /**
@@ -13,6 +14,8 @@ export const locationBlockSchema = z.strictObject({
 });
 export type LocationBlock = z.infer<typeof locationBlockSchema>;
 
+const fixTimeSchema = z.iso.datetime({ offset: true, error: 'Record when the fix was taken' });
+
 /** A GPS fix: position, its accuracy in metres, and when it was taken. */
 export function locationAnswerSchema(_block: LocationBlock) {
   return z.strictObject({
@@ -25,7 +28,19 @@ export function locationAnswerSchema(_block: LocationBlock) {
       .min(-180, 'Longitude runs from −180 to 180')
       .max(180, 'Longitude runs from −180 to 180'),
     accuracyMetres: z.number().finite().nonnegative('Accuracy cannot be negative'),
-    capturedAt: z.iso.datetime({ offset: true, error: 'Record when the fix was taken' }),
+    capturedAt: fixTimeSchema,
   });
 }
 export type LocationAnswer = z.infer<ReturnType<typeof locationAnswerSchema>>;
+
+const locationKeys = ['latitude', 'longitude', 'accuracyMetres', 'capturedAt'];
+
+/** The quick test of a location answer (see `answerFitsFor`). */
+export function locationAnswerFits(_block: LocationBlock) {
+  return (answer: unknown) =>
+    isRecordWith(answer, locationKeys) &&
+    isNumberBetween(answer['latitude'], -90, 90) &&
+    isNumberBetween(answer['longitude'], -180, 180) &&
+    isNumberBetween(answer['accuracyMetres'], 0, Infinity) &&
+    fixTimeSchema.safeParse(answer['capturedAt']).success;
+}

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { allDistinct, isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 import {
   choiceOptionListSchema,
@@ -46,3 +47,21 @@ export function multipleChoiceAnswerSchema(block: MultipleChoiceBlock) {
   });
 }
 export type MultipleChoiceAnswer = z.infer<ReturnType<typeof multipleChoiceAnswerSchema>>;
+
+const multipleChoiceKeys = ['values'];
+
+/** The quick test of a multiple-choice answer (see `answerFitsFor`). */
+export function multipleChoiceAnswerFits(block: MultipleChoiceBlock) {
+  const options = new Set(block.options.map((o) => o.value));
+  return (answer: unknown) => {
+    if (!isRecordWith(answer, multipleChoiceKeys)) return false;
+    const values = answer['values'];
+    if (!Array.isArray(values)) return false;
+    if (values.length < block.minChosen || values.length > block.maxChosen) return false;
+    for (let i = 0; i < values.length; i++) {
+      const value: unknown = values[i];
+      if (typeof value !== 'string' || !options.has(value)) return false;
+    }
+    return allDistinct(values);
+  };
+}

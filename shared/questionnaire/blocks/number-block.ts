@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isNumberBetween, isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
 /** Number: a count or measurement within an optional range, whole or not, with a unit label. */
@@ -29,3 +30,14 @@ export function numberAnswerSchema(block: NumberBlock) {
   return z.strictObject({ value });
 }
 export type NumberAnswer = z.infer<ReturnType<typeof numberAnswerSchema>>;
+
+const numberKeys = ['value'];
+
+/** The quick test of a number answer (see `answerFitsFor`). */
+export function numberAnswerFits(block: NumberBlock) {
+  const min = block.min ?? -Infinity;
+  const max = block.max ?? Infinity;
+  const inRange = block.wholeNumber ? isWholeBetween : isNumberBetween;
+  return (answer: unknown) =>
+    isRecordWith(answer, numberKeys) && inRange(answer['value'], min, max);
+}

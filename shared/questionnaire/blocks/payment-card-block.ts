@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { positiveMinorSchema } from '../../money/minor-amount';
+import { isRecordWith } from '../answer-shape';
 import { blockCommonShape, requireIncreasing } from '../block-common';
 
 /**
@@ -32,3 +33,15 @@ export function paymentCardAnswerSchema(block: PaymentCardBlock) {
   });
 }
 export type PaymentCardAnswer = z.infer<ReturnType<typeof paymentCardAnswerSchema>>;
+
+const paymentCardKeys = ['highestYesMinor'];
+
+/** The quick test of a payment-card answer (see `answerFitsFor`). */
+export function paymentCardAnswerFits(block: PaymentCardBlock) {
+  const amounts = new Set(block.amountsMinor);
+  return (answer: unknown) => {
+    if (!isRecordWith(answer, paymentCardKeys)) return false;
+    const amount = answer['highestYesMinor'];
+    return amount === null || (Number.isSafeInteger(amount) && amounts.has(amount as number));
+  };
+}

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { positiveMinorSchema } from '../../money/minor-amount';
+import { isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape, requireIncreasing } from '../block-common';
 
 /** The order in which the ladder's prices are put to the respondent. */
@@ -50,3 +51,29 @@ export function priceLadderAnswerSchema(block: PriceLadderBlock) {
   });
 }
 export type PriceLadderAnswer = z.infer<ReturnType<typeof priceLadderAnswerSchema>>;
+
+const ladderKeys = ['steps'];
+const stepKeys = ['priceMinor', 'response'];
+
+/** The quick test of a price-ladder answer (see `answerFitsFor`). */
+export function priceLadderAnswerFits(block: PriceLadderBlock) {
+  const prices = new Set(block.pricesMinor);
+  const fitsResponse =
+    block.scale === 'yes-no'
+      ? (response: unknown) => response === 'yes' || response === 'no'
+      : (response: unknown) => isWholeBetween(response, 1, 5);
+  return (answer: unknown) => {
+    if (!isRecordWith(answer, ladderKeys)) return false;
+    const steps = answer['steps'];
+    if (!Array.isArray(steps) || steps.length === 0) return false;
+    const asked = new Set<number>();
+    for (let i = 0; i < steps.length; i++) {
+      const step: unknown = steps[i];
+      if (!isRecordWith(step, stepKeys) || !fitsResponse(step['response'])) return false;
+      const price = step['priceMinor'];
+      if (!Number.isSafeInteger(price) || !prices.has(price as number)) return false;
+      asked.add(price as number);
+    }
+    return asked.size === steps.length;
+  };
+}

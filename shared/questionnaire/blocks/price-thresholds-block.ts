@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { nonNegativeMinorSchema, positiveMinorSchema } from '../../money/minor-amount';
+import { isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
 /**
@@ -55,4 +56,21 @@ export interface PriceThresholdsAnswer {
   tooExpensiveMinor: number;
   likelihoodCheap?: number;
   likelihoodExpensive?: number;
+}
+
+const likelihoodFields = ['likelihoodCheap', 'likelihoodExpensive'];
+
+/** The quick test of a price-thresholds answer (see `answerFitsFor`). */
+export function priceThresholdsAnswerFits(block: PriceThresholdsBlock) {
+  const prices = thresholdQuestions.map(([field]) => field as string);
+  const likelihoods = block.askLikelihood ? likelihoodFields : [];
+  const keys = [...prices, ...likelihoods];
+  return (answer: unknown) => {
+    if (!isRecordWith(answer, keys)) return false;
+    for (const field of prices) {
+      if (!isWholeBetween(answer[field], 0, block.maxPriceMinor)) return false;
+    }
+    for (const field of likelihoods) if (!isWholeBetween(answer[field], 1, 5)) return false;
+    return true;
+  };
 }

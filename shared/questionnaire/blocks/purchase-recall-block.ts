@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { positiveMinorSchema } from '../../money/minor-amount';
+import { isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
 /**
@@ -46,4 +47,19 @@ export function purchaseRecallAnswerSchema(block: PurchaseRecallBlock) {
 export interface PurchaseRecallAnswer {
   units: number;
   pricePaidMinor?: number;
+}
+
+const recallKeys = ['units', 'pricePaidMinor'];
+
+/** The quick test of a purchase-recall answer (see `answerFitsFor`). */
+export function purchaseRecallAnswerFits(block: PurchaseRecallBlock) {
+  return (answer: unknown) => {
+    if (!isRecordWith(answer, recallKeys)) return false;
+    const units = answer['units'];
+    if (!isWholeBetween(units, 0, block.maxUnits)) return false;
+    const price = answer['pricePaidMinor'];
+    return block.askPricePaid && units > 0
+      ? isWholeBetween(price, 1, Number.MAX_SAFE_INTEGER)
+      : price === undefined;
+  };
 }

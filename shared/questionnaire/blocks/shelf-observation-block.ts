@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { positiveMinorSchema } from '../../money/minor-amount';
+import { isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
 export const packUnits = ['g', 'kg', 'ml', 'l', 'piece'] as const;
@@ -38,6 +39,8 @@ export const shelfObservationBlockSchema = z
   });
 export type ShelfObservationBlock = z.infer<typeof shelfObservationBlockSchema>;
 
+const tagPhotoIdSchema = z.uuid('A photo is recorded by its id');
+
 /** Price, pack size, the count the block asks for, and the tag photo when the block wants it. */
 export function shelfObservationAnswerSchema(block: ShelfObservationBlock) {
   const shape = {
@@ -45,7 +48,7 @@ export function shelfObservationAnswerSchema(block: ShelfObservationBlock) {
     packSize: z.number().finite().positive('The pack size must be more than zero'),
     quantity: z.int('Count whole units').nonnegative('A count cannot be negative'),
   };
-  const photoId = z.uuid('A photo is recorded by its id');
+  const photoId = tagPhotoIdSchema;
   if (block.photo === 'required') return z.strictObject({ ...shape, photoId });
   if (block.photo === 'optional') return z.strictObject({ ...shape, photoId: photoId.optional() });
   return z.strictObject(shape);
@@ -55,4 +58,27 @@ export interface ShelfObservationAnswer {
   packSize: number;
   quantity: number;
   photoId?: string;
+}
+
+const shelfKeys = ['priceMinor', 'packSize', 'quantity'];
+const shelfKeysWithPhoto = [...shelfKeys, 'photoId'];
+
+/** The quick test of a shelf-observation answer (see `answerFitsFor`). */
+export function shelfObservationAnswerFits(block: ShelfObservationBlock) {
+  const keys = block.photo === 'none' ? shelfKeys : shelfKeysWithPhoto;
+  return (answer: unknown) => {
+    if (!isRecordWith(answer, keys)) return false;
+    const packSize = answer['packSize'];
+    if (
+      !isWholeBetween(answer['priceMinor'], 1, Number.MAX_SAFE_INTEGER) ||
+      !Number.isFinite(packSize) ||
+      (packSize as number) <= 0 ||
+      !isWholeBetween(answer['quantity'], 0, Number.MAX_SAFE_INTEGER)
+    ) {
+      return false;
+    }
+    const photoId = answer['photoId'];
+    if (photoId === undefined) return block.photo !== 'required';
+    return tagPhotoIdSchema.safeParse(photoId).success;
+  };
 }

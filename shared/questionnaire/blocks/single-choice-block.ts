@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 import {
   choiceOptionListSchema,
@@ -20,3 +21,15 @@ export function singleChoiceAnswerSchema(block: SingleChoiceBlock) {
   return z.strictObject({ value: optionValueSchema(block.options) });
 }
 export type SingleChoiceAnswer = z.infer<ReturnType<typeof singleChoiceAnswerSchema>>;
+
+const singleChoiceKeys = ['value'];
+
+/** The quick test of a single-choice answer (see `answerFitsFor`). */
+export function singleChoiceAnswerFits(block: SingleChoiceBlock) {
+  const values = new Set(block.options.map((o) => o.value));
+  return (answer: unknown) => {
+    if (!isRecordWith(answer, singleChoiceKeys)) return false;
+    const value = answer['value'];
+    return typeof value === 'string' && values.has(value);
+  };
+}

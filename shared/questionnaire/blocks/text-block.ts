@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
 /** Text: a free answer up to `maxLength` characters, on one line or several. */
@@ -20,3 +21,16 @@ export function textAnswerSchema(block: TextBlock) {
   });
 }
 export type TextAnswer = z.infer<ReturnType<typeof textAnswerSchema>>;
+
+const textKeys = ['value'];
+
+/** The quick test of a text answer (see `answerFitsFor`); the schema trims before counting. */
+export function textAnswerFits(block: TextBlock) {
+  return (answer: unknown) => {
+    if (!isRecordWith(answer, textKeys)) return false;
+    const value = answer['value'];
+    if (typeof value !== 'string') return false;
+    const length = value.trim().length;
+    return length >= 1 && length <= block.maxLength;
+  };
+}

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { nonNegativeMinorSchema, positiveMinorSchema } from '../../money/minor-amount';
+import { isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
 /**
@@ -33,3 +34,13 @@ export function wtpOpenAnswerSchema(block: WtpOpenBlock) {
   });
 }
 export type WtpOpenAnswer = z.infer<ReturnType<typeof wtpOpenAnswerSchema>>;
+
+const wtpOpenKeys = ['amountMinor'];
+
+/** The quick test of an open willingness-to-pay answer (see `answerFitsFor`). */
+export function wtpOpenAnswerFits(block: WtpOpenBlock) {
+  const lowest = Math.max(0, block.minMinor);
+  return (answer: unknown) =>
+    isRecordWith(answer, wtpOpenKeys) &&
+    isWholeBetween(answer['amountMinor'], lowest, block.maxMinor);
+}
