@@ -1,5 +1,6 @@
 import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, chownSync, writeFileSync, rmSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 
 const binDir = '/usr/lib/postgresql/15/bin';
@@ -116,6 +117,10 @@ export async function startPostgres(options: ClusterOptions): Promise<RunningClu
     '-c max_connections=200',
     '-c shared_buffers=256MB',
     '-c fsync=on',
+    // One process per core for a parallel scan: the leader plus cores − 1 workers. The default
+    // (two workers) puts three CPU-bound processes on a two-core machine, each compiling its
+    // own JIT code; with one worker a fit's wide aggregates ran about 6% faster.
+    `-c max_parallel_workers_per_gather=${Math.max(1, availableParallelism() - 1)}`,
   ].join(' ');
   const started = asPostgres('pg_ctl', [
     '-D',
