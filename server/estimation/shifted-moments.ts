@@ -3,7 +3,6 @@ import type {
   CrossProductSpec,
   Moments,
 } from '@shared/estimation/least-squares/cross-product-moments';
-import { exactDecimal } from './exact-decimal';
 import type { ShiftedSums } from './moment-pass';
 
 /**
@@ -31,7 +30,7 @@ export function sumsAbout(sums: ShiftedSums, origin: readonly number[]): Rationa
 
 /**
  * The unweighted sums as solveFromCrossProducts takes them: the raw Σz·zᵀ over
- * z = [1, x…, y] (or [x…, y] without an intercept) as exact decimal strings.
+ * z = [1, x…, y] (or [x…, y] without an intercept), exactly (as rationals).
  */
 export function crossProductSpecOf(
   sums: ShiftedSums,
@@ -47,7 +46,7 @@ export function crossProductSpecOf(
     regressorNames: names.regressors,
     responseName: names.response,
     n: sums.n,
-    crossProducts: matrix.map((row) => row.map(exactDecimal)),
+    crossProducts: matrix,
     intercept: options.intercept,
     confidenceLevel: options.confidenceLevel,
   };

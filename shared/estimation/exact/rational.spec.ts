@@ -18,6 +18,18 @@ describe('Rational', () => {
     expect(tenth.toNumber()).toBe(0.1);
   });
 
+  it('keeps lowest terms on the power-of-two path as on the general one', () => {
+    // The fast path for dyadic denominators must give what Euclid gives.
+    expect(Rational.of(12n, 8n)).toEqual({ num: 3n, den: 2n });
+    expect(Rational.of(-16n, 64n)).toEqual({ num: -1n, den: 4n });
+    expect(Rational.of(5n, 4n)).toEqual({ num: 5n, den: 4n });
+    expect(Rational.of(96n, -32n)).toEqual({ num: -3n, den: 1n });
+    expect(Rational.of(0n, 1024n)).toEqual({ num: 0n, den: 1n });
+    const big = (3n << 700n) + (1n << 200n);
+    expect(Rational.of(big, 1n << 300n)).toEqual({ num: (3n << 500n) + 1n, den: 1n << 100n });
+    expect(Rational.of(30n, 12n)).toEqual({ num: 5n, den: 2n }); // general path
+  });
+
   it('rounds back to the nearest float64', () => {
     expect(r(1, 3).toNumber()).toBe(1 / 3);
     expect(r(-2, 7).toNumber()).toBe(-2 / 7);

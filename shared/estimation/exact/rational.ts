@@ -18,7 +18,18 @@ export class Rational {
   static of(num: bigint, den = 1n): Rational {
     if (den === 0n) throw new EstimationError('division-by-zero', 'exact division by zero');
     if (den < 0n) [num, den] = [-num, -den];
-    const g = gcd(num < 0n ? -num : num, den);
+    if (den === 1n) return new Rational(num, 1n);
+    const magnitude = num < 0n ? -num : num;
+    // Sums and products of float64 values have power-of-two denominators: their common factor
+    // with the numerator is the numerator's lowest set bit, with no Euclid over long BigInts
+    // (which took most of an in-database fit's solve).
+    if ((den & (den - 1n)) === 0n) {
+      if (magnitude === 0n) return Rational.ZERO;
+      const lowestBit = magnitude & -magnitude;
+      const common = lowestBit < den ? lowestBit : den;
+      return new Rational(num / common, den / common);
+    }
+    const g = gcd(magnitude, den);
     return new Rational(num / g, den / g);
   }
 

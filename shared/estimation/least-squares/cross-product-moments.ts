@@ -1,8 +1,11 @@
 import { EstimationError } from '../estimation-error';
 import { Rational } from '../exact/rational';
 
-/** A sum as the database returns it: a float64, or an exact decimal string (numeric). */
-export type SumValue = number | string;
+/**
+ * A sum as the database returns it: a float64, or an exact decimal string (numeric) — or, from
+ * code that already holds it exactly, a Rational (taken as exact, like a decimal string).
+ */
+export type SumValue = number | string | Rational;
 
 /** The sums a least-squares fit needs, as the database computes them. */
 export interface CrossProductSpec {
@@ -62,7 +65,7 @@ export function crossProductMoments(spec: CrossProductSpec): Moments {
   }
   const m = exactMatrix(spec.crossProducts, k + (raw ? 2 : 1));
   const exactInput = [...spec.crossProducts.flat(), ...(spec.means ?? [])].every(
-    (v) => typeof v === 'string',
+    (v) => typeof v === 'string' || v instanceof Rational,
   );
   if (raw) return { ...centreRaw(m, spec.n, k), exactInput };
   const moments = {
@@ -113,6 +116,7 @@ function exactMeans(means: readonly SumValue[], k: number): Rational[] {
 }
 
 function exact(value: SumValue, where: string): Rational {
+  if (value instanceof Rational) return value;
   try {
     return typeof value === 'string' ? Rational.fromDecimal(value) : Rational.fromNumber(value);
   } catch {
