@@ -2,6 +2,7 @@ import {
   check,
   date,
   foreignKey,
+  index,
   integer,
   pgTable,
   primaryKey,
@@ -33,6 +34,8 @@ export const routes = pgTable(
   (table) => [
     check('routes_window', sql`${table.windowEnd} >= ${table.windowStart}`),
     unique('routes_study_id').on(table.studyId, table.id),
+    // Every sync batch and every device's assignment download starts from the enumerator's routes.
+    index('routes_enumerator').on(table.enumeratorId),
   ],
 );
 

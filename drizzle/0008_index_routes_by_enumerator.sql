@@ -1,0 +1,1 @@
+CREATE INDEX "routes_enumerator" ON "routes" USING btree ("enumerator_id");
