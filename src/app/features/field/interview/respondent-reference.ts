@@ -68,6 +68,8 @@ import { maxRespondentReferenceLength } from '@shared/field-sync/respondent-key'
     </div>
   `,
   styles: `
+    @use '../../field-blocks/field-input';
+
     .reference {
       display: grid;
       gap: 6px;
@@ -94,20 +96,7 @@ import { maxRespondentReferenceLength } from '@shared/field-sync/respondent-key'
       color: var(--mat-sys-error);
     }
     .reference__input {
-      box-sizing: border-box;
-      width: 100%;
-      min-height: 56px;
-      padding: 8px 12px;
-      border: 1px solid var(--mat-sys-outline);
-      border-radius: 8px;
-      background: var(--mat-sys-surface);
-      color: var(--mat-sys-on-surface);
-      font: var(--mat-sys-body-large);
-      font-size: 1.25rem;
-    }
-    .reference__input:focus {
-      outline: 3px solid var(--mat-sys-primary);
-      outline-offset: 1px;
+      @include field-input.field-input(56px);
     }
     .reference__input[aria-invalid='true'] {
       border-color: var(--mat-sys-error);
