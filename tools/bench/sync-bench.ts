@@ -8,6 +8,7 @@ import { benchBatches } from './sync-bench-interviews';
 import { batchBody, runDevices } from './sync-bench-load';
 import { createBenchStudy } from './sync-bench-setup';
 import { exportInterviewRows, timeCopy } from './sync-bench-copy';
+import { cpuSeconds } from './process-cpu';
 
 /** How much load the sync part makes. */
 export interface SyncBenchSize {
@@ -78,6 +79,11 @@ export async function runSyncBench(
     const slice = (from: number, count: number) =>
       bodies.map((own) => own.slice(from, from + count));
     await runDevices(url, study.devices, slice(0, 1));
+    // Where the rounds' CPU goes: the server process, the database's backends, this client.
+    const backends = `postgres: ${new URL(context.databaseUrl).username} `;
+    const cpuBefore = cpuSeconds(server.child.pid!, backends);
+    const clientBefore = process.cpuUsage();
+    let accepted = 0;
     const syncRates: number[] = [];
     for (let round = 0; round < rounds; round += 1) {
       const run = await runDevices(
@@ -86,10 +92,27 @@ export async function runSyncBench(
         slice(1 + round * size.batchesPerDevice, size.batchesPerDevice),
       );
       syncRates.push(run.accepted / run.seconds);
+      accepted += run.accepted;
       context.log(
         `sync round ${round + 1}: ${run.accepted} interviews by ${size.devices} devices in ${run.seconds.toFixed(2)} s`,
       );
     }
+    const cpuAfter = cpuSeconds(server.child.pid!, backends);
+    const client = process.cpuUsage(clientBefore);
+    if (cpuBefore && cpuAfter) {
+      const perInterview = (seconds: number) => (seconds * 1e6) / accepted;
+      context.report(
+        'sync-server-cpu-per-interview',
+        perInterview(cpuAfter.tree - cpuBefore.tree),
+        'µs',
+      );
+      context.report(
+        'sync-database-cpu-per-interview',
+        perInterview(cpuAfter.matching - cpuBefore.matching),
+        'µs',
+      );
+    }
+    context.report('sync-client-cpu-per-interview', (client.user + client.system) / accepted, 'µs');
     const rows = await exportInterviewRows(context.databaseUrl, study.studyId);
     const rowCount = rows.split('\n').filter(Boolean).length;
     const copyRate = async (withReferenceChecks: boolean) => {
