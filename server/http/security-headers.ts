@@ -17,7 +17,9 @@ export function securityHeaders(config: Config) {
         // Review screens show interview photos through presigned links to the object store.
         imgSrc: ["'self'", 'data:', 'blob:', objectStoreOrigin(config)],
         fontSrc: ["'self'"],
-        connectSrc: ["'self'"],
+        // The service worker fetches every request a page makes, photos included, and its
+        // fetches answer to connect-src: without the object store here, photos came back 504.
+        connectSrc: ["'self'", objectStoreOrigin(config)],
         workerSrc: ["'self'"],
         manifestSrc: ["'self'"],
         objectSrc: ["'none'"],

@@ -205,6 +205,12 @@ describe('field work with no network', () => {
       await review.getByRole('heading', { name: 'Quality flags' }).waitFor();
       await review.getByText(/Recorded away from the point: 2\.\d km away/).waitFor();
       await review.getByRole('img', { name: /recorded .* from the assigned point/ }).waitFor();
+      // The photo itself loads from the object store through its short-lived link.
+      await review.waitForFunction(() =>
+        [...document.images].some(
+          (image) => image.alt === 'Photo 1 of the interview' && image.naturalWidth > 0,
+        ),
+      );
       await screenshot(review, 'review-interview-360');
       await expectNoSeriousViolations(review, 'the interview review page');
       await review
