@@ -10,7 +10,7 @@ import { enforceMonotone } from '@shared/estimation/price-ladder/monotone-answer
 import { analysePriceLadder } from '@shared/estimation/price-ladder/price-ladder';
 import type { AnalysisDataset } from '../analysis-dataset';
 import { weightOf, type RespondentWeights } from '../respondent-weights';
-import { coefficientFrom, figure, pointFigure, type MethodFit } from './method-fit';
+import { coefficientFrom, figure, type MethodFit } from './method-fit';
 
 /**
  * Gabor–Granger: the engine's ladder analysis (monotone answers, weighted shares, logistic
@@ -72,7 +72,13 @@ export function fitLadder(
         logistic.profitMaxPrice,
         'price',
       ),
-      pointFigure('Revenue-maximising ladder price', 'price', result.revenueMaxPrice),
+      {
+        label: 'Revenue-maximising ladder price',
+        unit: 'price' as const,
+        estimate: result.revenueMaxPrice,
+        ciLow: result.revenueMaxPriceInterval.ciLow,
+        ciHigh: result.revenueMaxPriceInterval.ciHigh,
+      },
     ],
     tables: [
       {

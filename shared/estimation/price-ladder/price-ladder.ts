@@ -20,6 +20,7 @@ import {
   summariseLogisticCurve,
   type LogisticPurchaseSummary,
 } from './logistic-purchase-curve';
+import { gridMaximumInterval, type GridMaximumInterval } from './grid-maximum-interval';
 import { enforceMonotone, type MonotoneRule } from './monotone-answers';
 
 export interface PriceLadderSpec {
@@ -45,7 +46,10 @@ export interface PriceLadderResult {
   readonly steps: LadderStep[];
   /** Ladder price with the largest revenue index (ties: lowest price). */
   readonly revenueMaxPrice: number;
+  /** The ladder prices resampled surveys chose instead (respondent bootstrap). */
+  readonly revenueMaxPriceInterval: GridMaximumInterval;
   readonly profitMaxPrice: number | null;
+  readonly profitMaxPriceInterval: GridMaximumInterval | null;
   readonly arcElasticities: ArcStep[];
   readonly logistic: LogisticPurchaseSummary;
   readonly curve: FittedDemandCurve;
@@ -82,6 +86,8 @@ export function analysePriceLadder(spec: PriceLadderSpec): PriceLadderResult {
     unitCost,
   );
   const observed = { min: steps[0].price, max: steps[steps.length - 1].price };
+  const level = spec.confidenceLevel ?? 0.95;
+  const sample = { respondents, prices, probabilities: monotone.probabilities, weights };
   return {
     n,
     answers: answers.length,
@@ -89,8 +95,13 @@ export function analysePriceLadder(spec: PriceLadderSpec): PriceLadderResult {
     changedAnswers: monotone.changedAnswers,
     steps,
     revenueMaxPrice: priceOfMaximum(steps, (s) => s.revenueIndex),
+    revenueMaxPriceInterval: gridMaximumInterval(sample, (price, share) => price * share, level),
     profitMaxPrice:
       unitCost === undefined ? null : priceOfMaximum(steps, (s) => s.profitIndex ?? 0),
+    profitMaxPriceInterval:
+      unitCost === undefined
+        ? null
+        : gridMaximumInterval(sample, (price, share) => (price - unitCost) * share, level),
     arcElasticities: arcSteps(steps),
     logistic,
     curve: logisticPurchaseCurve(fit, fit.robustCovariance, observed, n),
@@ -111,7 +122,7 @@ function ladderAssumptions(
       ? `intent calibrated to purchase probability ${JSON.stringify(calibration)}`
       : 'answers are 0/1 purchase decisions',
     `monotone rule '${rule}' applied per respondent`,
-    'grid maxima: ties go to the lowest price',
+    'grid maxima: ties go to the lowest price; their intervals from 1,000 respondent resamples (percentile bootstrap, seeded)',
     'arc elasticities by the midpoint formula',
     'logistic purchase curve by maximum likelihood (fractional logit when intent is calibrated)',
     `standard errors cluster-robust by respondent (${clusters} clusters, factor G/(G−1)); intervals normal (delta method)`,
