@@ -1,5 +1,4 @@
 import type { FitSpecOf } from '@shared/analysis/fit-spec';
-import { fittedCurveFrom } from '@shared/analysis/fitted-curve';
 import { buildDemandDesign } from '@shared/estimation/least-squares/demand-design';
 import type { DemandFit } from '@shared/estimation/least-squares/demand-fit';
 import { fitDemandModel } from '@shared/estimation/least-squares/fit-demand-model';
@@ -31,7 +30,7 @@ export function fitObserved(
   const observed = rangeOf(model.price.values);
   const { curve, reason } = curveAtMeans(fit, design, model.weights, 'price', observed);
   const own = fit.elasticities.find((e) => e.kind === 'own-price');
-  const prices = curve ? optimalPriceFigures(fittedCurveFrom(curve), spec.unitCost) : [];
+  const prices = curve ? optimalPriceFigures(curve, spec.unitCost, spec.confidenceLevel) : [];
   return {
     n: new Set(rows.map((r) => r.interviewId)).size,
     observations: fit.n,

@@ -1,21 +1,33 @@
+import { curveEnsemble } from '@shared/analysis/curve-ensemble';
+import type { CurveDescription } from '@shared/analysis/curve-description';
+import { estimateOnEnsemble } from '@shared/analysis/estimated-figure';
 import type { KeyFigure } from '@shared/analysis/fit-result';
-import type { FittedDemandCurve } from '@shared/estimation/demand-schedule/fitted-demand-curve';
 import { EstimationError } from '@shared/estimation/estimation-error';
 import { optimalPrice } from '@shared/estimation/welfare/optimal-price';
-import { pointFigure } from './method-fit';
 
 /**
  * Revenue-maximising and (with a unit cost) profit-maximising prices on a fitted curve, where
- * they exist; point estimates (the curve's own uncertainty shows in the schedule's band).
+ * they exist, each with the percentile interval of the same price on curves drawn from the
+ * coefficients' sampling distribution — the seeded draws the analysis screens use, so the key
+ * figure, the published schedule and the screen agree.
  */
 export function optimalPriceFigures(
-  curve: FittedDemandCurve,
+  curve: CurveDescription,
   unitCost: number | null,
+  confidenceLevel: number,
 ): KeyFigure[] {
+  const ensemble = curveEnsemble(curve, confidenceLevel);
   const figures: KeyFigure[] = [];
   const tryPrice = (label: string, cost: number) => {
     try {
-      figures.push(pointFigure(label, 'price', optimalPrice(curve, cost)));
+      const price = estimateOnEnsemble(ensemble, (c) => optimalPrice(c, cost));
+      figures.push({
+        label,
+        unit: 'price',
+        estimate: price.estimate,
+        ciLow: price.low,
+        ciHigh: price.high,
+      });
     } catch (error) {
       if (!(error instanceof EstimationError)) throw error;
     }

@@ -1,9 +1,13 @@
 import { linearDescription, zeroCovariance } from '../testing/linear-description';
-import { curveEnsemble } from './curve-ensemble';
+import { curveEnsemble } from '@shared/analysis/curve-ensemble';
 import { curveFigures, type FigureOutcome } from './curve-figures';
-import { estimateOnEnsemble, quantileOfSorted, type EstimatedFigure } from './estimated-figure';
+import {
+  estimateOnEnsemble,
+  quantileOfSorted,
+  type EstimatedFigure,
+} from '@shared/analysis/estimated-figure';
 import { FigureFormat } from './figure-format';
-import { choleskyFactor, normalParameterDraws } from './parameter-draws';
+import { choleskyFactor, normalParameterDraws } from '@shared/analysis/parameter-draws';
 
 const value = (outcome: FigureOutcome | null): EstimatedFigure => {
   if (!outcome?.ok) throw new Error('expected a figure');

@@ -3,7 +3,11 @@ import { consumerSurplus } from '@shared/estimation/welfare/consumer-surplus';
 import type { DemandCurve } from '@shared/estimation/welfare/demand-curve';
 import { optimalPrice } from '@shared/estimation/welfare/optimal-price';
 import { pointElasticity } from '@shared/estimation/welfare/point-elasticity';
-import { estimateOnEnsemble, type CurveEnsemble, type EstimatedFigure } from './estimated-figure';
+import {
+  estimateOnEnsemble,
+  type CurveEnsemble,
+  type EstimatedFigure,
+} from '@shared/analysis/estimated-figure';
 
 /** A figure, or why the curve gives none (said so a researcher can act on it). */
 export type FigureOutcome =

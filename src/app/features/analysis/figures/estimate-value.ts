@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import type { EstimatedFigure } from './estimated-figure';
+import type { EstimatedFigure } from '@shared/analysis/estimated-figure';
 import { levelLabel, type FigureFormat, type FigureUnit } from './figure-format';
 
 /**

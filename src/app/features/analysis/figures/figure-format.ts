@@ -1,4 +1,4 @@
-import type { EstimatedFigure } from './estimated-figure';
+import type { EstimatedFigure } from '@shared/analysis/estimated-figure';
 
 /** The kinds of number the analysis screens show, each with its own way of writing. */
 export type FigureUnit = 'price' | 'share' | 'quantity' | 'elasticity' | 'index' | 'count';

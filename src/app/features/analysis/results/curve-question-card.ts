@@ -4,7 +4,7 @@ import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { curveFigures, type FigureOutcome } from '../figures/curve-figures';
-import type { CurveEnsemble } from '../figures/estimated-figure';
+import type { CurveEnsemble } from '@shared/analysis/estimated-figure';
 import { EstimateValue } from '../figures/estimate-value';
 import type { FigureFormat, FigureUnit } from '../figures/figure-format';
 

@@ -8,7 +8,7 @@ import { AnalysisWorkspaceState } from '../analysis-workspace-state';
 import { DemandChart } from '../charts/demand-chart';
 import { demandAxisTitles, fitBandedCurve } from '../charts/fit-curves';
 import { ResidualChart } from '../charts/residual-chart';
-import { curveEnsemble } from '../figures/curve-ensemble';
+import { curveEnsemble } from '@shared/analysis/curve-ensemble';
 import { EstimateValue } from '../figures/estimate-value';
 import { ScheduleTable } from '../schedule/schedule-table';
 import { CoefficientTable } from './coefficient-table';

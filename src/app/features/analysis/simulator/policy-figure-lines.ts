@@ -1,4 +1,4 @@
-import type { EstimatedFigure } from '../figures/estimated-figure';
+import type { EstimatedFigure } from '@shared/analysis/estimated-figure';
 import type { FigureUnit } from '../figures/figure-format';
 import type { PolicyFigureKey, PolicyKind } from './policy-simulation';
 

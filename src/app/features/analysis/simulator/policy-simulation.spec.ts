@@ -1,4 +1,4 @@
-import { curveEnsemble } from '../figures/curve-ensemble';
+import { curveEnsemble } from '@shared/analysis/curve-ensemble';
 import { linearDescription, zeroCovariance } from '../testing/linear-description';
 import { policyFigureLines } from './policy-figure-lines';
 import { simulatePolicy, type PolicyInputs } from './policy-simulation';

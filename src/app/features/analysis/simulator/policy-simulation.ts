@@ -14,7 +14,7 @@ import {
   estimateFieldsOnEnsemble,
   type CurveEnsemble,
   type EstimatedFigure,
-} from '../figures/estimated-figure';
+} from '@shared/analysis/estimated-figure';
 
 export type PolicyKind = PricePolicy['kind'];
 

@@ -13,7 +13,7 @@ import { MatInput } from '@angular/material/input';
 import { MatRadioModule } from '@angular/material/radio';
 import { RouterLink } from '@angular/router';
 import { AnalysisWorkspaceState } from '../analysis-workspace-state';
-import { curveEnsemble } from '../figures/curve-ensemble';
+import { curveEnsemble } from '@shared/analysis/curve-ensemble';
 import { EstimateValue } from '../figures/estimate-value';
 import { FitPicker } from '../results/fit-picker';
 import { PolicyChart } from './policy-chart';

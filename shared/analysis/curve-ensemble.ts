@@ -1,7 +1,7 @@
-import type { CurveDescription } from '@shared/analysis/curve-description';
-import { fittedCurveFrom } from '@shared/analysis/fitted-curve';
-import type { FittedDemandCurve } from '@shared/estimation/demand-schedule/fitted-demand-curve';
-import type { DemandCurve } from '@shared/estimation/welfare/demand-curve';
+import type { CurveDescription } from './curve-description';
+import { fittedCurveFrom } from './fitted-curve';
+import type { FittedDemandCurve } from '../estimation/demand-schedule/fitted-demand-curve';
+import type { DemandCurve } from '../estimation/welfare/demand-curve';
 import type { CurveEnsemble } from './estimated-figure';
 import { normalParameterDraws } from './parameter-draws';
 

@@ -1,5 +1,5 @@
-import { gaussian } from '@shared/estimation/random/gaussian';
-import { mulberry32 } from '@shared/estimation/random/mulberry32';
+import { gaussian } from '../estimation/random/gaussian';
+import { mulberry32 } from '../estimation/random/mulberry32';
 
 /**
  * Lower-triangular L with L·Lᵀ = covariance. A zero pivot (a parameter held fixed) gives a zero

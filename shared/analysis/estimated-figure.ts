@@ -1,4 +1,4 @@
-import type { DemandCurve } from '@shared/estimation/welfare/demand-curve';
+import type { DemandCurve } from '../estimation/welfare/demand-curve';
 
 /** A figure shown to a researcher or client: always an estimate, with its interval when known. */
 export interface EstimatedFigure {
