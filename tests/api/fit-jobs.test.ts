@@ -11,6 +11,7 @@ import { runFitJob } from '../../server/fits/run-fit-job';
 import { startWorkerProcess, type WorkerProcess } from '../../tools/stack/worker-process';
 import { insertLanternData } from '../support/analysis-study';
 import { insertAwkwardData } from '../support/awkward-study';
+import type { FitResult } from '@shared/analysis/fit-result';
 import { commonSpec, manySpecs, shelfLogLog } from '../support/fit-specs';
 import { signedInAgent, type SignedInAgent } from '../support/signed-in-agent';
 import { insertStudy } from '../support/study-rows';
@@ -105,6 +106,22 @@ describe('fit jobs on the queue', () => {
     }
     // Different filters use different rows, so their hashes differ (dichotomous: flagged in/out).
     expect(rows[half - 1].dataHash).not.toBe(rows[half - 2].dataHash);
+  });
+
+  it('gives every price among the key figures an interval that holds its estimate', () => {
+    // Ladder grid maxima and threshold crossings by respondent resampling, curve optima by
+    // parameter draws, the rest by the delta method: no price goes out as if it were known.
+    const prices = rows.flatMap((row) =>
+      (row.result as FitResult).keyFigures.filter((k) => k.unit === 'price'),
+    );
+    expect(prices.length).toBeGreaterThan(10);
+    const unbracketed = prices.filter(
+      (price) =>
+        typeof price.ciLow !== 'number' ||
+        typeof price.ciHigh !== 'number' ||
+        !(price.ciLow <= price.estimate && price.estimate <= price.ciHigh),
+    );
+    expect(unbracketed).toEqual([]);
   });
 
   it('stores one result when a job is delivered again', async () => {

@@ -1,10 +1,13 @@
 import type { FitSpecOf } from '@shared/analysis/fit-spec';
-import type { Crossing } from '@shared/estimation/price-thresholds/curve-crossing';
-import { analysePriceThresholds } from '@shared/estimation/price-thresholds/price-thresholds';
+import {
+  analysePriceThresholds,
+  type PriceThresholdResult,
+} from '@shared/estimation/price-thresholds/price-thresholds';
+import { respondentBootstrap } from '@shared/estimation/resampling/respondent-bootstrap';
 import type { ThresholdAnswer } from '@shared/estimation/price-thresholds/threshold-answers';
 import type { AnalysisDataset } from '../analysis-dataset';
 import { weightOf, type RespondentWeights } from '../respondent-weights';
-import { pointFigure, rangeOf, type MethodFit } from './method-fit';
+import { rangeOf, type MethodFit } from './method-fit';
 
 /**
  * Van Westendorp's four curves and price points; when every respondent answered the two
@@ -12,7 +15,7 @@ import { pointFigure, rangeOf, type MethodFit } from './method-fit';
  */
 export function fitThresholds(
   dataset: AnalysisDataset<'price-thresholds'>,
-  _spec: FitSpecOf<'price-thresholds'>,
+  spec: FitSpecOf<'price-thresholds'>,
   weights: RespondentWeights | null,
 ): MethodFit {
   const answers: ThresholdAnswer[] = dataset.rows.map((r) => ({
@@ -27,13 +30,23 @@ export function fitThresholds(
   const withTrial =
     dataset.rows.length > 0 &&
     dataset.rows.every((r) => r.likelihoodCheap !== null && r.likelihoodExpensive !== null);
-  const result = analysePriceThresholds({ answers, withTrialCurve: withTrial });
-  const points: [string, Crossing | null][] = [
-    ['Point of marginal cheapness', result.marginalCheapnessPrice],
-    ['Optimal price point', result.optimalPrice],
-    ['Indifference price point', result.indifferencePrice],
-    ['Point of marginal expensiveness', result.marginalExpensivenessPrice],
-  ];
+  const analyse = (sample: readonly ThresholdAnswer[]) =>
+    analysePriceThresholds({ answers: sample, withTrialCurve: withTrial });
+  const result = analyse(answers);
+  // The price points are crossings of empirical curves: their intervals come from resampling
+  // respondents and finding the crossings again.
+  const intervals = respondentBootstrap(
+    answers,
+    pricePointKeys,
+    (s) => pricePoints(analyse(s)),
+    spec.confidenceLevel,
+  );
+  const estimates = pricePoints(result);
+  const keyFigures = pricePointKeys.flatMap((key) => {
+    const estimate = estimates[key];
+    if (estimate === null) return [];
+    return [{ label: pricePointLabels[key], unit: 'price' as const, estimate, ...intervals[key] }];
+  });
   const { curves, trial } = result;
   const kept = dataset.rows.filter(
     (r) => r.tooCheap <= r.cheap && r.cheap <= r.expensive && r.expensive <= r.tooExpensive,
@@ -48,25 +61,7 @@ export function fitThresholds(
       { label: 'Left out: thresholds out of order', value: result.outOfOrderRespondents },
     ],
     elasticities: [],
-    keyFigures: [
-      ...points.flatMap(([label, point]) =>
-        point ? [pointFigure(label, 'price', point.price)] : [],
-      ),
-      ...(trial
-        ? [
-            pointFigure(
-              'Price of the highest trial (Newton–Miller–Smith)',
-              'price',
-              trial.maxTrial.price,
-            ),
-            pointFigure(
-              'Revenue-maximising price (trial × price)',
-              'price',
-              trial.maxRevenue.price,
-            ),
-          ]
-        : []),
-    ],
+    keyFigures,
     tables: [
       {
         title: 'Price threshold curves',
@@ -103,5 +98,28 @@ export function fitThresholds(
           ]
         : []),
     ],
+  };
+}
+
+const pricePointLabels = {
+  marginalCheapness: 'Point of marginal cheapness',
+  optimal: 'Optimal price point',
+  indifference: 'Indifference price point',
+  marginalExpensiveness: 'Point of marginal expensiveness',
+  highestTrial: 'Price of the highest trial (Newton–Miller–Smith)',
+  trialRevenueMax: 'Revenue-maximising price (trial × price)',
+} as const;
+type PricePoint = keyof typeof pricePointLabels;
+const pricePointKeys = Object.keys(pricePointLabels) as PricePoint[];
+
+/** The analysis's price points by name; null where the curves do not give one. */
+function pricePoints(result: PriceThresholdResult): Record<PricePoint, number | null> {
+  return {
+    marginalCheapness: result.marginalCheapnessPrice?.price ?? null,
+    optimal: result.optimalPrice?.price ?? null,
+    indifference: result.indifferencePrice?.price ?? null,
+    marginalExpensiveness: result.marginalExpensivenessPrice?.price ?? null,
+    highestTrial: result.trial?.maxTrial.price ?? null,
+    trialRevenueMax: result.trial?.maxRevenue.price ?? null,
   };
 }
