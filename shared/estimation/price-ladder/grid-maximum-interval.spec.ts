@@ -45,8 +45,8 @@ describe('gridMaximumInterval (percentile bootstrap over respondents, common pra
     const wide = gridMaximumInterval(sample, revenue, 0.95);
     expect(gridMaximumInterval(sample, revenue, 0.95)).toEqual(wide);
     const narrow = gridMaximumInterval(sample, revenue, 0.5);
-    expect(narrow.ciLow).toBeGreaterThanOrEqual(wide.ciLow);
-    expect(narrow.ciHigh).toBeLessThanOrEqual(wide.ciHigh);
+    expect(narrow.ciLow).toBeGreaterThanOrEqual(wide.ciLow!);
+    expect(narrow.ciHigh).toBeLessThanOrEqual(wide.ciHigh!);
   });
 
   it('agrees with resampling done the plain way, through the ladder-step summary', () => {

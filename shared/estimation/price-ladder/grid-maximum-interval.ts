@@ -1,4 +1,4 @@
-import { mulberry32 } from '../random/mulberry32';
+import { respondentBootstrap, type ResampledInterval } from '../resampling/respondent-bootstrap';
 
 /** The ladder's answers after the monotone rule, one entry per answer. */
 export interface LadderSample {
@@ -9,9 +9,7 @@ export interface LadderSample {
 }
 
 /** The central range of the ladder prices that resampled surveys chose. */
-export interface GridMaximumInterval {
-  readonly ciLow: number;
-  readonly ciHigh: number;
+export interface GridMaximumInterval extends ResampledInterval {
   readonly resamples: number;
 }
 
@@ -20,11 +18,10 @@ export const GRID_MAXIMUM_RESAMPLES = 1000;
 
 /**
  * How firmly the grid picks its best price: respondents are drawn with replacement (all of a
- * respondent's answers together), the weighted share at each ladder price and the price with the
- * largest `value(price, share)` are found again (ties to the lowest price, as for the estimate),
- * and the interval is the central `level` share of those prices — a percentile bootstrap, common
- * practice for a statistic with no delta-method form. The draws are seeded, so a fit repeated
- * on the same answers gives the same interval.
+ * respondent's answers together, by `respondentBootstrap`), the weighted share at each ladder
+ * price and the price with the largest `value(price, share)` are found again (ties to the lowest
+ * price, as for the estimate), and the interval is the central `level` share of those prices.
+ * The draws are seeded, so a fit repeated on the same answers gives the same interval.
  */
 export function gridMaximumInterval(
   sample: LadderSample,
@@ -47,34 +44,34 @@ export function gridMaximumInterval(
     own.weight[j] += sample.weights[i];
     own.bought[j] += sample.weights[i] * sample.probabilities[i];
   });
-  const people = [...byRespondent.values()];
-  const uniform = mulberry32(seed);
-  const chosen: number[] = [];
   const weight = new Float64Array(levels.length);
   const bought = new Float64Array(levels.length);
-  for (let draw = 0; draw < resamples; draw++) {
+  const bestPrice = (people: readonly { weight: Float64Array; bought: Float64Array }[]) => {
     weight.fill(0);
     bought.fill(0);
-    for (let k = 0; k < people.length; k++) {
-      const person = people[Math.floor(uniform() * people.length)];
+    for (const person of people) {
       for (let j = 0; j < levels.length; j++) {
         weight[j] += person.weight[j];
         bought[j] += person.bought[j];
       }
     }
-    let best = -1;
+    let best: number | null = null;
     let bestValue = -Infinity;
     for (let j = 0; j < levels.length; j++) {
       // A price no drawn respondent answered at cannot be chosen.
       if (weight[j] === 0) continue;
       const v = value(levels[j], bought[j] / weight[j]);
-      if (v > bestValue) [best, bestValue] = [j, v];
+      if (v > bestValue) [best, bestValue] = [levels[j], v];
     }
-    if (best >= 0) chosen.push(levels[best]);
-  }
-  chosen.sort((a, b) => a - b);
-  const tail = (1 - level) / 2;
-  const at = (p: number) =>
-    chosen[Math.min(chosen.length - 1, Math.max(0, Math.floor(p * chosen.length)))];
-  return { ciLow: at(tail), ciHigh: at(1 - tail), resamples: chosen.length };
+    return { price: best };
+  };
+  const { price } = respondentBootstrap(
+    [...byRespondent.values()],
+    ['price'],
+    bestPrice,
+    level,
+    resamples,
+    seed,
+  );
+  return { ...price, resamples };
 }
