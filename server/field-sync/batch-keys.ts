@@ -4,9 +4,15 @@ const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{1
 export interface BatchKeys {
   interviewIds: string[];
   versionIds: string[];
-  studyIds: string[];
   photoIds: string[];
-  respondentKeys: string[];
+  /** Each item's (study, respondent key) pair, for the same-respondent check. */
+  respondents: RespondentSlotKey[];
+}
+
+/** A respondent within a study, as the batch names it. */
+export interface RespondentSlotKey {
+  studyId: string;
+  respondentKey: string;
 }
 
 const uuidAt = (record: Record<string, unknown>, key: string): string[] => {
@@ -23,18 +29,18 @@ export function batchKeys(items: readonly unknown[]): BatchKeys {
   const keys: BatchKeys = {
     interviewIds: [],
     versionIds: [],
-    studyIds: [],
     photoIds: [],
-    respondentKeys: [],
+    respondents: [],
   };
   for (const item of items) {
     if (item === null || typeof item !== 'object') continue;
     const record = item as Record<string, unknown>;
     keys.interviewIds.push(...uuidAt(record, 'id'));
     keys.versionIds.push(...uuidAt(record, 'questionnaireVersionId'));
-    keys.studyIds.push(...uuidAt(record, 'studyId'));
-    if (typeof record['respondentKey'] === 'string')
-      keys.respondentKeys.push(record['respondentKey']);
+    const [studyId] = uuidAt(record, 'studyId');
+    const respondentKey = record['respondentKey'];
+    if (studyId !== undefined && typeof respondentKey === 'string')
+      keys.respondents.push({ studyId, respondentKey });
     if (Array.isArray(record['photos'])) {
       for (const photo of record['photos'] as unknown[]) {
         if (photo !== null && typeof photo === 'object') {

@@ -31,7 +31,7 @@ export async function syncBatch(
     versionCache.load(db, keys.versionIds),
     loadExistingInterviews(db, keys.interviewIds),
     loadPhotoOwners(db, keys.photoIds),
-    loadRespondentMatches(db, keys.studyIds, keys.respondentKeys),
+    loadRespondentMatches(db, keys.respondents),
   ]);
   const plan = planSyncBatch(items, {
     enumeratorId: actor.userId,
