@@ -6,7 +6,7 @@ import { runFitJob } from './fits/run-fit-job';
 
 /**
  * A fit worker: takes fit jobs from the queue one at a time and runs them. Start as many as the
- * machines allow (`tsx server/worker.ts`); they share one queue in PostgreSQL.
+ * machines allow (compiled to `dist/server/worker.mjs`); they share one queue in PostgreSQL.
  */
 const config = loadConfig();
 const db = connectDatabase(config.DATABASE_URL, 3);

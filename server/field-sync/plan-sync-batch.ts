@@ -89,8 +89,6 @@ export function planSyncBatch(items: readonly unknown[], facts: BatchFacts): Pla
       id: interview.id,
       row,
       photos: photoRows(interview.id, interview.photos),
-      // A method, not an arrow: tsx (which runs the server) names each arrow function it
-      // creates, a costly defineProperty for each of thousands of items.
       fingerprint() {
         return fingerprintOf(checked);
       },

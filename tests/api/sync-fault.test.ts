@@ -1,10 +1,10 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { join } from 'node:path';
 import { count, eq, inArray } from 'drizzle-orm';
 import type { FieldInterview } from '@shared/field-sync/field-interview';
 import type { SyncBatchResult, SyncItemResult } from '@shared/field-sync/sync-batch';
 import { interviews } from '../../server/db/schema';
 import { freePort } from '../../tools/stack/free-port';
+import { serverCommand } from '../../tools/stack/server-build';
 import { checkoutRoot } from '../../tools/stack/state-dir';
 import { createFieldSetup, fieldInterview, type FieldSetup } from '../support/field-setup';
 import { createTestApp } from '../support/test-app';
@@ -19,19 +19,16 @@ interface RunningServer {
   child: ChildProcess;
 }
 
-/** `server/main.ts` in ONE node process (tsx as a loader, no wrapper), so SIGKILL hits the server. */
+/** The compiled server in ONE node process (no wrapper), so SIGKILL hits the server. */
 async function startServer(): Promise<RunningServer> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const child = spawn(
-    process.execPath,
-    ['--import', 'tsx', join(checkoutRoot, 'server', 'main.ts')],
-    {
-      cwd: checkoutRoot,
-      env: { ...process.env, HOST: '127.0.0.1', PORT: String(port), APP_URL: url, STATIC_DIR: '' },
-      stdio: ['ignore', 'ignore', 'ignore'],
-    },
-  );
+  const [command, args] = await serverCommand('main');
+  const child = spawn(command, args, {
+    cwd: checkoutRoot,
+    env: { ...process.env, HOST: '127.0.0.1', PORT: String(port), APP_URL: url, STATIC_DIR: '' },
+    stdio: ['ignore', 'ignore', 'ignore'],
+  });
   for (let attempt = 0; attempt < 600; attempt += 1) {
     if (child.exitCode !== null) throw new Error(`the server exited with code ${child.exitCode}`);
     const health = await fetch(`${url}/api/health`).catch(() => undefined);

@@ -1,5 +1,5 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { join } from 'node:path';
+import { serverCommand } from './server-build';
 import { checkoutRoot } from './state-dir';
 
 export interface ServerProcess {
@@ -21,20 +21,20 @@ async function waitForHealth(url: string, child: ChildProcess): Promise<void> {
   throw new Error('the server did not answer /api/health within 30 s');
 }
 
-/** Runs `server/main.ts` as its own process, the way production runs it, with the stack's config. */
+/**
+ * Runs the web server (`server/main.ts`, compiled) as its own process, the way production runs
+ * it, with the stack's config.
+ */
 export async function startServerProcess(
   env: Record<string, string>,
   quiet = false,
 ): Promise<ServerProcess> {
-  const child = spawn(
-    join(checkoutRoot, 'node_modules', '.bin', 'tsx'),
-    [join(checkoutRoot, 'server', 'main.ts')],
-    {
-      cwd: checkoutRoot,
-      env: { ...process.env, ...env },
-      stdio: quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
-    },
-  );
+  const [command, args] = await serverCommand('main');
+  const child = spawn(command, args, {
+    cwd: checkoutRoot,
+    env: { ...process.env, ...env },
+    stdio: quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
+  });
   await waitForHealth(env['APP_URL'], child);
   return {
     child,

@@ -1,6 +1,6 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { join } from 'node:path';
 import { createInterface } from 'node:readline';
+import { serverCommand } from './server-build';
 import { checkoutRoot } from './state-dir';
 
 export interface WorkerProcess {
@@ -9,18 +9,19 @@ export interface WorkerProcess {
 }
 
 /**
- * Runs `server/worker.ts` as its own process (as production runs workers, apart from the web
+ * Runs the fit worker (`server/worker.ts`, compiled) as its own process (as production runs workers, apart from the web
  * server) and waits until it has joined the fit queue.
  */
 export async function startWorkerProcess(
   env: Record<string, string>,
   quiet = false,
 ): Promise<WorkerProcess> {
-  const child = spawn(
-    join(checkoutRoot, 'node_modules', '.bin', 'tsx'),
-    [join(checkoutRoot, 'server', 'worker.ts')],
-    { cwd: checkoutRoot, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'inherit'] },
-  );
+  const [command, args] = await serverCommand('worker');
+  const child = spawn(command, args, {
+    cwd: checkoutRoot,
+    env: { ...process.env, ...env },
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
   await new Promise<void>((ready, failed) => {
     const timer = setTimeout(
       () => failed(new Error('the fit worker did not start within 60 s')),
