@@ -28,22 +28,39 @@ const columns: readonly (keyof InterviewInsert)[] = [
 const snakeCase = (name: string) => name.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
 const copyStatement = `COPY interviews (${columns.map(snakeCase).join(', ')}) FROM STDIN`;
 
-/** One field in COPY's text format: \N for NULL; backslash, tab and line breaks escaped. */
-function copyField(value: unknown): string {
-  if (value === null || value === undefined) return '\\N';
-  let text: string;
-  if (value instanceof Date) text = value.toISOString();
-  else if (typeof value === 'string') text = value;
-  else if (typeof value === 'number' || typeof value === 'boolean') text = String(value);
-  else text = JSON.stringify(value);
-  return text.replace(/[\\\t\n\r]/g, (c) =>
-    c === '\\' ? '\\\\' : c === '\t' ? '\\t' : c === '\n' ? '\\n' : '\\r',
-  );
+const escapable = /[\\\t\n\r]/;
+const escapeSequence: Record<string, string> = {
+  '\\': '\\\\',
+  '\t': '\\t',
+  '\n': '\\n',
+  '\r': '\\r',
+};
+
+/** Text as COPY reads it: backslash, tab and line breaks escaped (most values have none). */
+function copyText(text: string): string {
+  return escapable.test(text) ? text.replace(/[\\\t\n\r]/g, (c) => escapeSequence[c]) : text;
 }
 
-/** The rows as COPY text, one line per interview. */
+/** One field in COPY's text format: \N for NULL. */
+function copyField(value: unknown): string {
+  if (value === null || value === undefined) return '\\N';
+  if (typeof value === 'string') return copyText(value);
+  if (typeof value === 'number' || typeof value === 'boolean') return String(value);
+  if (value instanceof Date) return value.toISOString();
+  // JSON escapes control characters itself, so only its backslashes need doubling.
+  const json = JSON.stringify(value);
+  return json.includes('\\') ? json.replaceAll('\\', '\\\\') : json;
+}
+
+/** The rows as COPY text, one line per interview (built by concatenation: it is hot). */
 export function interviewCopyText(rows: readonly InterviewInsert[]): string {
-  return rows.map((row) => columns.map((c) => copyField(row[c])).join('\t') + '\n').join('');
+  let text = '';
+  for (const row of rows) {
+    let line = copyField(row[columns[0]]);
+    for (let c = 1; c < columns.length; c += 1) line += '\t' + copyField(row[columns[c]]);
+    text += line + '\n';
+  }
+  return text;
 }
 
 /** SQLSTATE of a unique violation: an id stored meanwhile by another request. */
