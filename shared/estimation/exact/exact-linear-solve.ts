@@ -1,10 +1,17 @@
 import { EstimationError } from '../estimation-error';
 import { gcd, Rational } from './rational';
 
-/** The exact solution of S·b = s and the exact inverse S⁻¹. */
+/**
+ * The exact solution of S·b = s and the exact inverse S⁻¹, as integer numerators over one
+ * common denominator: b = solution / denominator, S⁻¹ = inverse / denominator. Left unreduced
+ * on purpose: the denominator is a determinant hundreds of digits long, and reducing each entry
+ * by Euclid took most of an in-database fit's solve, while callers mostly want float64s (see
+ * fractionToNumber) or a few exact combinations that can stay over the same denominator.
+ */
 export interface ExactSolution {
-  readonly solution: Rational[];
-  readonly inverse: Rational[][];
+  readonly solution: bigint[];
+  readonly inverse: bigint[][];
+  readonly denominator: bigint;
 }
 
 /**
@@ -50,7 +57,8 @@ export function exactLinearSolve(
   // Every diagonal entry now equals the determinant of the scaled matrix, `previous`.
   const determinant = previous;
   return {
-    solution: rows.map((row) => Rational.of(row[k], determinant)),
-    inverse: rows.map((row) => row.slice(k + 1).map((v) => Rational.of(v * scale, determinant))),
+    solution: rows.map((row) => row[k]),
+    inverse: rows.map((row) => row.slice(k + 1).map((v) => v * scale)),
+    denominator: determinant,
   };
 }

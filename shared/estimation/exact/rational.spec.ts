@@ -1,5 +1,5 @@
 import { exactLinearSolve } from './exact-linear-solve';
-import { Rational } from './rational';
+import { fractionToNumber, Rational } from './rational';
 import { refusalOf } from '../../../tests/support/estimation-refusal';
 
 const r = (num: number, den = 1): Rational => Rational.of(BigInt(num), BigInt(den));
@@ -44,6 +44,18 @@ describe('Rational', () => {
   });
 });
 
+describe('fractionToNumber', () => {
+  it('rounds unreduced fractions and negative denominators as their lowest terms would', () => {
+    // Long equal factors on both sides must not change the rounding.
+    const big = 10n ** 400n + 7n;
+    expect(fractionToNumber(big, 3n * big)).toBe(1 / 3);
+    expect(fractionToNumber(6n, -9n)).toBe(-2 / 3);
+    expect(fractionToNumber(-6n, -9n)).toBe(2 / 3);
+    expect(fractionToNumber(0n, -5n)).toBe(0);
+    expect(fractionToNumber(2n ** 60n * 10n, 2n ** 60n * 4n)).toBe(2.5);
+  });
+});
+
 describe('exactLinearSolve', () => {
   it('inverts the 4×4 Hilbert matrix to its integer inverse', () => {
     // Source: the closed form of the Hilbert inverse (its entries are integers), from memory;
@@ -55,16 +67,20 @@ describe('exactLinearSolve', () => {
       [240, -2700, 6480, -4200],
       [-140, 1680, -4200, 2800],
     ];
-    const { inverse, solution } = exactLinearSolve(
+    const { inverse, solution, denominator } = exactLinearSolve(
       hilbert,
       [r(1), r(0), r(0), r(0)],
       ['a', 'b', 'c', 'd'],
     );
-    expect(inverse.map((row) => row.map((v) => v.toNumber()))).toEqual(expected);
-    expect(solution.map((v) => v.toNumber())).toEqual(expected[0]);
+    const exact = (numerator: bigint) => Rational.of(numerator, denominator);
+    expect(inverse.map((row) => row.map((v) => exact(v).toNumber()))).toEqual(expected);
+    expect(solution.map((v) => fractionToNumber(v, denominator))).toEqual(expected[0]);
     hilbert.forEach((row, i) =>
       [0, 1, 2, 3].forEach((j) => {
-        const product = row.reduce((sum, h, m) => sum.add(h.mul(inverse[m][j])), Rational.ZERO);
+        const product = row.reduce(
+          (sum, h, m) => sum.add(h.mul(exact(inverse[m][j]))),
+          Rational.ZERO,
+        );
         expect(product.toNumber()).toBe(i === j ? 1 : 0);
       }),
     );

@@ -85,18 +85,28 @@ export class Rational {
 
   /** The nearest float64 (correct to within one unit in the last place). */
   toNumber(): number {
-    if (this.num === 0n) return 0;
-    const negative = this.num < 0n;
-    const num = negative ? -this.num : this.num;
-    // Scale so the integer quotient carries 64+ significant bits, then let Number() round it.
-    const shift = bitLength(this.den) - bitLength(num) + 66;
-    const quotient =
-      shift >= 0 ? (num << BigInt(shift)) / this.den : num / (this.den << BigInt(-shift));
-    // Two steps keep 2^−shift from underflowing before the product is formed.
-    const half = Math.trunc(shift / 2);
-    const value = Number(quotient) * 2 ** -half * 2 ** -(shift - half);
-    return negative ? -value : value;
+    return fractionToNumber(this.num, this.den);
   }
+}
+
+/**
+ * The nearest float64 to num/den (correct to within one unit in the last place), for any
+ * fraction, reduced or not: callers that only want a number skip reducing it, which for long
+ * numerators and denominators costs far more than the division.
+ */
+export function fractionToNumber(numerator: bigint, denominator: bigint): number {
+  if (denominator === 0n) throw new EstimationError('division-by-zero', 'exact division by zero');
+  if (numerator === 0n) return 0;
+  const negative = numerator < 0n !== denominator < 0n;
+  const num = numerator < 0n ? -numerator : numerator;
+  const den = denominator < 0n ? -denominator : denominator;
+  // Scale so the integer quotient carries 64+ significant bits, then let Number() round it.
+  const shift = bitLength(den) - bitLength(num) + 66;
+  const quotient = shift >= 0 ? (num << BigInt(shift)) / den : num / (den << BigInt(-shift));
+  // Two steps keep 2^−shift from underflowing before the product is formed.
+  const half = Math.trunc(shift / 2);
+  const value = Number(quotient) * 2 ** -half * 2 ** -(shift - half);
+  return negative ? -value : value;
 }
 
 /** Greatest common divisor of two non-negative BigInts (1 when both are 0). */

@@ -1,4 +1,4 @@
-import { Rational } from '../exact/rational';
+import { fractionToNumber, Rational } from '../exact/rational';
 import { exactLinearSolve } from '../exact/exact-linear-solve';
 import { CompensatedSum } from './compensated-dot';
 import type { Moments } from './cross-product-moments';
@@ -40,24 +40,41 @@ function exactSolve(
   names: readonly string[],
   n: number,
 ): NormalEquationsSolution {
-  const { solution: b, inverse } = exactLinearSolve(moments.gram, moments.cross, names);
-  const rss = b.reduce((sum, bj, j) => sum.sub(bj.mul(moments.cross[j])), moments.responseSquares);
-  const means = moments.regressorMeans;
-  const slopeInverse = inverse.map((row) => row.map((v) => v.toNumber()));
-  const base = { residualSumOfSquares: Math.max(rss.toNumber(), 0), slopeInverse, exact: true };
-  if (means === null)
-    return { ...base, estimates: b.map((v) => v.toNumber()), inverseGram: slopeInverse };
-  const intercept = b.reduce((sum, bj, j) => sum.sub(bj.mul(means[j])), moments.responseMean!);
-  const sx = inverse.map((row) =>
-    row.reduce((sum, v, j) => sum.add(v.mul(means[j])), Rational.ZERO),
+  const { solution, inverse, denominator } = exactLinearSolve(moments.gram, moments.cross, names);
+  // Every exact figure below is kept as a numerator over the solve's common denominator D: the
+  // numerators are rationals with the short denominators of the sums, so no long D ever enters
+  // a reduction, and each figure is rounded to float64 once at the end.
+  const over = (numerator: Rational) =>
+    fractionToNumber(numerator.num, numerator.den * denominator);
+  const times = (value: Rational, integer: bigint) => value.mul(Rational.of(integer));
+  // RSS = syy − bᵀs = (syy·D − Σ Bⱼsⱼ) / D
+  const rss = solution.reduce(
+    (sum, bj, j) => sum.sub(times(moments.cross[j], bj)),
+    times(moments.responseSquares, denominator),
   );
-  const corner = means.reduce((sum, m, j) => sum.add(m.mul(sx[j])), Rational.of(1n, BigInt(n)));
-  const sxNumbers = sx.map((v) => v.toNumber());
+  const slopeInverse = inverse.map((row) => row.map((v) => fractionToNumber(v, denominator)));
+  const slopes = solution.map((v) => fractionToNumber(v, denominator));
+  const base = { residualSumOfSquares: Math.max(over(rss), 0), slopeInverse, exact: true };
+  const means = moments.regressorMeans;
+  if (means === null) return { ...base, estimates: slopes, inverseGram: slopeInverse };
+  // ȳ − x̄ᵀb, S⁻¹x̄ and 1/n + x̄ᵀS⁻¹x̄, each over D.
+  const intercept = solution.reduce(
+    (sum, bj, j) => sum.sub(times(means[j], bj)),
+    times(moments.responseMean!, denominator),
+  );
+  const sx = inverse.map((row) =>
+    row.reduce((sum, v, j) => sum.add(times(means[j], v)), Rational.ZERO),
+  );
+  const corner = means.reduce(
+    (sum, m, j) => sum.add(m.mul(sx[j])),
+    Rational.of(denominator, BigInt(n)),
+  );
+  const sxNumbers = sx.map(over);
   return {
     ...base,
-    estimates: [intercept, ...b].map((v) => v.toNumber()),
+    estimates: [over(intercept), ...slopes],
     inverseGram: [
-      [corner.toNumber(), ...sxNumbers.map((v) => -v)],
+      [over(corner), ...sxNumbers.map((v) => -v)],
       ...slopeInverse.map((row, i) => [-sxNumbers[i], ...row]),
     ],
   };
