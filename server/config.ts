@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 
 const flag = z
@@ -12,6 +13,8 @@ const flag = z
 const configSchema = z.object({
   HOST: z.string().default('127.0.0.1'),
   PORT: z.coerce.number().int().min(0).max(65535).default(4400),
+  /** Web server processes sharing the port (one per core by default; see server/main.ts). */
+  WEB_PROCESSES: z.coerce.number().int().min(1).max(64).default(availableParallelism()),
   APP_URL: z.url(),
   STATIC_DIR: z.string().optional(),
   DATABASE_URL: z.string().startsWith('postgres'),

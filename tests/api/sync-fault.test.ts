@@ -1,11 +1,8 @@
-import { spawn, type ChildProcess } from 'node:child_process';
 import { count, eq, inArray } from 'drizzle-orm';
 import type { FieldInterview } from '@shared/field-sync/field-interview';
 import type { SyncBatchResult, SyncItemResult } from '@shared/field-sync/sync-batch';
 import { interviews } from '../../server/db/schema';
-import { freePort } from '../../tools/stack/free-port';
-import { serverCommand } from '../../tools/stack/server-build';
-import { checkoutRoot } from '../../tools/stack/state-dir';
+import { killHard, startCompiledServer, type RunningServer } from '../support/compiled-server';
 import { createFieldSetup, fieldInterview, type FieldSetup } from '../support/field-setup';
 import { createTestApp } from '../support/test-app';
 
@@ -14,37 +11,11 @@ const { db } = testApp.deps;
 const rounds = 5;
 const batchSize = 200;
 
-interface RunningServer {
-  url: string;
-  child: ChildProcess;
-}
-
-/** The compiled server in ONE node process (no wrapper), so SIGKILL hits the server. */
-async function startServer(): Promise<RunningServer> {
-  const port = await freePort();
-  const url = `http://127.0.0.1:${port}`;
-  const [command, args] = await serverCommand('main');
-  const child = spawn(command, args, {
-    cwd: checkoutRoot,
-    env: { ...process.env, HOST: '127.0.0.1', PORT: String(port), APP_URL: url, STATIC_DIR: '' },
-    stdio: ['ignore', 'ignore', 'ignore'],
-  });
-  for (let attempt = 0; attempt < 600; attempt += 1) {
-    if (child.exitCode !== null) throw new Error(`the server exited with code ${child.exitCode}`);
-    const health = await fetch(`${url}/api/health`).catch(() => undefined);
-    if (health) return { url, child };
-    await new Promise((r) => setTimeout(r, 50));
-  }
-  throw new Error('the server did not answer within 30 s');
-}
-
-function killHard(server: RunningServer): Promise<void> {
-  return new Promise((done) => {
-    if (server.child.exitCode !== null || server.child.signalCode !== null) return done();
-    server.child.once('exit', () => done());
-    server.child.kill('SIGKILL');
-  });
-}
+/**
+ * One web process, so the SIGKILL lands on the very process holding the batch (a cluster's
+ * primary, killed, lets its web processes finish their current step first).
+ */
+const startServer = () => startCompiledServer({ WEB_PROCESSES: '1' });
 
 let setup: FieldSetup;
 let headers: Record<string, string>;
