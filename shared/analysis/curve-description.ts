@@ -1,6 +1,12 @@
 import { z } from 'zod';
 
 const priceRangeSchema = z.object({ min: z.number().finite(), max: z.number().finite() });
+/**
+ * The share at each knot of a tabulated curve in respondent resamples, one row per resample:
+ * the curve's sampling spread, for its band and for intervals of figures read off it. Absent on
+ * fits stored before it was computed, and when too many knots would make it too large.
+ */
+const resampledSharesSchema = z.array(z.array(z.number().min(0).max(1))).optional();
 const covarianceSchema = z.array(z.array(z.number().finite()).length(2)).length(2);
 
 const regressionShape = {
@@ -54,6 +60,7 @@ export const curveDescriptionSchema = z.discriminatedUnion('kind', [
     points: z
       .array(z.object({ price: z.number().finite(), share: z.number().min(0).max(1) }))
       .min(1),
+    resampledShares: resampledSharesSchema,
     observedPriceRange: priceRangeSchema,
     n: z.int().positive(),
   }),
@@ -62,6 +69,7 @@ export const curveDescriptionSchema = z.discriminatedUnion('kind', [
     kind: z.literal('piecewise-share'),
     prices: z.array(z.number().finite()).min(2),
     shares: z.array(z.number().finite()).min(2),
+    resampledShares: resampledSharesSchema,
     observedPriceRange: priceRangeSchema,
     n: z.int().positive(),
   }),

@@ -39,11 +39,31 @@ function parametersOf(
   }
 }
 
+/** The curves of a tabulated description's respondent resamples (none when it has none). */
+function resampledCurves(description: CurveDescription): CurveDescription[] {
+  if (description.kind === 'step-share') {
+    return (description.resampledShares ?? []).map((shares) => ({
+      ...description,
+      points: description.points.map((point, i) => ({ price: point.price, share: shares[i] })),
+      resampledShares: undefined,
+    }));
+  }
+  if (description.kind === 'piecewise-share') {
+    return (description.resampledShares ?? []).map((shares) => ({
+      ...description,
+      shares,
+      resampledShares: undefined,
+    }));
+  }
+  return [];
+}
+
 /**
  * The fitted curve and `count` curves rebuilt from parameter draws, for intervals of derived
  * figures (elasticity, optimal prices, surplus, policy effects). A draw whose parameters give no
  * valid curve (a rising linear demand, say) is dropped and counts as a draw without a value.
- * Step and piecewise curves have no parameters to draw: their figures come without an interval.
+ * Step and piecewise curves have no parameters to draw: their draws are the curves of their
+ * respondent resamples, when the fit kept them, and otherwise their figures have no interval.
  */
 export function curveEnsemble(
   description: CurveDescription,
@@ -52,7 +72,10 @@ export function curveEnsemble(
 ): CurveEnsemble & { readonly central: FittedDemandCurve } {
   const central = fittedCurveFrom(description);
   const parameters = parametersOf(description);
-  if (!parameters) return { central, draws: [], requested: 0, confidenceLevel };
+  if (!parameters) {
+    const resampled = resampledCurves(description).map(fittedCurveFrom);
+    return { central, draws: resampled, requested: resampled.length, confidenceLevel };
+  }
   const draws: DemandCurve[] = [];
   for (const values of normalParameterDraws(parameters.mean, parameters.covariance, count)) {
     try {

@@ -27,10 +27,24 @@ export const keyFigureSchema = z.object({
 });
 export type KeyFigure = z.infer<typeof keyFigureSchema>;
 
-/** A method's own table (ladder steps, threshold points…), ready to show as it is. */
+/** How a detail table's numbers are written: the analysis screens' kinds of figure. */
+export const detailColumnUnits = [
+  'price',
+  'share',
+  'quantity',
+  'elasticity',
+  'index',
+  'count',
+] as const;
+
+/**
+ * A method's own table (ladder steps, threshold curves…), ready to show as it is. Each column
+ * may name its unit; fits stored before units were given show plain numbers.
+ */
 export const detailTableSchema = z.object({
   title: z.string(),
   columns: z.array(z.string()),
+  columnUnits: z.array(z.enum(detailColumnUnits)).optional(),
   rows: z.array(z.array(z.union([finite, z.string(), z.null()]))),
 });
 export type DetailTable = z.infer<typeof detailTableSchema>;

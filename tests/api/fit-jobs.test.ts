@@ -124,6 +124,23 @@ describe('fit jobs on the queue', () => {
     expect(unbracketed).toEqual([]);
   });
 
+  it('gives every row of every schedule a band that holds its estimate', () => {
+    // Regression and likelihood curves by the delta method, the tabulated curves (threshold
+    // trial curve, open-WTP curve) by respondent resampling: no share goes out bare.
+    const bare = rows.flatMap((row) =>
+      ((row.result as FitResult).schedule?.rows ?? [])
+        .filter(
+          (r) =>
+            r.ciLow === null ||
+            r.ciHigh === null ||
+            !(r.ciLow <= r.quantity && r.quantity <= r.ciHigh),
+        )
+        .map((r) => `${(row.spec as FitSpec).method} at ${r.price}`),
+    );
+    expect(rows.filter((row) => (row.result as FitResult).schedule).length).toBeGreaterThan(5);
+    expect(bare).toEqual([]);
+  });
+
   it('stores one result when a job is delivered again', async () => {
     const [first] = rows;
     await runFitJob(deps.db, first.id, 'test-redelivery');
@@ -137,6 +154,8 @@ describe('fit jobs on the queue', () => {
 
   it('shows progress and the result through the API', async () => {
     const response = await researcher.get(`/api/studies/${studyId}/fits/${ids[0]}`);
+    // Results travel compressed (the agent, like a browser, accepts gzip).
+    expect(response.headers['content-encoding']).toBe('gzip');
     const fit = response.body as FitResource;
     expect(fit).toMatchObject({ status: 'done', progress: 100, dataHash: rows[0].dataHash });
     expect(fit.result?.schedule?.rows).toHaveLength(commonSpec.priceGrid.steps);

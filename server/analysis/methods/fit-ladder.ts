@@ -84,11 +84,13 @@ export function fitLadder(
       {
         title: 'Ladder steps',
         columns: ['Price', 'Respondents', 'Purchase share', 'Revenue index'],
+        columnUnits: ['price', 'count', 'share', 'index'],
         rows: result.steps.map((s) => [s.price, s.respondents, s.share, s.revenueIndex]),
       },
       {
         title: 'Arc elasticities between ladder prices',
         columns: ['From price', 'To price', 'Arc elasticity'],
+        columnUnits: ['price', 'price', 'elasticity'],
         rows: result.arcElasticities.map((a) => [a.fromPrice, a.toPrice, a.elasticity]),
       },
     ],

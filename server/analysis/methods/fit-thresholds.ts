@@ -3,7 +3,16 @@ import {
   analysePriceThresholds,
   type PriceThresholdResult,
 } from '@shared/estimation/price-thresholds/price-thresholds';
-import { respondentBootstrap } from '@shared/estimation/resampling/respondent-bootstrap';
+import {
+  compactShare,
+  resampledBandNote,
+  resampledCurveCount,
+} from '@shared/analysis/resampled-curves';
+import { piecewiseShare } from '@shared/analysis/tabulated-share-curves';
+import {
+  percentileIntervals,
+  respondentResamples,
+} from '@shared/estimation/resampling/respondent-bootstrap';
 import type { ThresholdAnswer } from '@shared/estimation/price-thresholds/threshold-answers';
 import type { AnalysisDataset } from '../analysis-dataset';
 import { weightOf, type RespondentWeights } from '../respondent-weights';
@@ -33,12 +42,12 @@ export function fitThresholds(
   const analyse = (sample: readonly ThresholdAnswer[]) =>
     analysePriceThresholds({ answers: sample, withTrialCurve: withTrial });
   const result = analyse(answers);
-  // The price points are crossings of empirical curves: their intervals come from resampling
-  // respondents and finding the crossings again.
-  const intervals = respondentBootstrap(
-    answers,
+  // The price points are crossings of empirical curves and the trial curve is an average of
+  // answers: their intervals and band come from resampling respondents and analysing again.
+  const resamples = respondentResamples(answers, analyse);
+  const intervals = percentileIntervals(
+    resamples.map((r) => r && pricePoints(r)),
     pricePointKeys,
-    (s) => pricePoints(analyse(s)),
     spec.confidenceLevel,
   );
   const estimates = pricePoints(result);
@@ -48,6 +57,7 @@ export function fitThresholds(
     return [{ label: pricePointLabels[key], unit: 'price' as const, estimate, ...intervals[key] }];
   });
   const { curves, trial } = result;
+  const resampledShares = trial ? resampledTrialShares(resamples, trial.prices) : undefined;
   const kept = dataset.rows.filter(
     (r) => r.tooCheap <= r.cheap && r.cheap <= r.expensive && r.expensive <= r.tooExpensive,
   );
@@ -66,6 +76,7 @@ export function fitThresholds(
       {
         title: 'Price threshold curves',
         columns: ['Price', 'Too cheap', 'Cheap', 'Expensive', 'Too expensive'],
+        columnUnits: ['price', 'share', 'share', 'share', 'share'],
         rows: curves.prices.map((p, i) => [
           p,
           curves.tooCheap[i],
@@ -81,6 +92,7 @@ export function fitThresholds(
           kind: 'piecewise-share',
           prices: trial.prices,
           shares: trial.trial,
+          resampledShares,
           observedPriceRange: observed,
           n: result.n,
         }
@@ -97,8 +109,26 @@ export function fitThresholds(
             'trial curve: mean calibrated purchase likelihood, 5 → 0.7, 4 → 0.5, 3 → 0.3, 2 → 0.1, 1 → 0 (common practice)',
           ]
         : []),
+      ...(resampledShares ? [resampledBandNote(resampledShares.length)] : []),
     ],
   };
+}
+
+/**
+ * Each resample's trial curve read at the full sample's knots (its own knots differ), for as
+ * many resamples as the budget allows; none when a resample has no trial curve.
+ */
+function resampledTrialShares(
+  resamples: readonly (PriceThresholdResult | null)[],
+  knots: readonly number[],
+): number[][] | undefined {
+  const count = resampledCurveCount(knots.length);
+  const kept = resamples.slice(0, count);
+  if (count === 0 || kept.some((r) => !r?.trial)) return undefined;
+  return kept.map((r) => {
+    const { prices, trial } = r!.trial!;
+    return knots.map((p) => compactShare(piecewiseShare(prices, trial, p)));
+  });
 }
 
 const pricePointLabels = {

@@ -1,4 +1,10 @@
 import type { FitSpecOf } from '@shared/analysis/fit-spec';
+import {
+  compactShare,
+  resampledBandNote,
+  resampledCurveCount,
+} from '@shared/analysis/resampled-curves';
+import { respondentResamples } from '@shared/estimation/resampling/respondent-bootstrap';
 import { analyseOpenEndedWtp } from '@shared/estimation/willingness-to-pay/open-ended-wtp';
 import type { AnalysisDataset } from '../analysis-dataset';
 import { weightOf, type RespondentWeights } from '../respondent-weights';
@@ -18,6 +24,10 @@ export function fitWtpOpen(
     replicates: spec.bootstrap.replicates,
     seed: spec.bootstrap.seed,
   });
+  const resampledShares = resampledStepShares(
+    dataset.rows.map((r) => ({ amount: r.amount, weight: weightOf(weights, r.interviewId) })),
+    result.demandCurve.map((p) => p.price),
+  );
   return {
     n: result.n,
     observations: result.n,
@@ -32,6 +42,7 @@ export function fitWtpOpen(
       {
         title: 'Share willing to pay at least each amount',
         columns: ['Amount', 'Share'],
+        columnUnits: ['price', 'share'],
         rows: result.demandCurve.map((p) => [p.price, p.share]),
       },
     ],
@@ -39,12 +50,47 @@ export function fitWtpOpen(
     curve: {
       kind: 'step-share',
       points: result.demandCurve,
+      resampledShares,
       observedPriceRange: result.curve.observedPriceRange,
       n: result.n,
     },
     noCurveReason: null,
     evidence: dataset.rows.map((r) => ({ points: [r.amount] })),
     warnings: [],
-    assumptions: result.assumptions,
+    assumptions: [
+      ...result.assumptions,
+      ...(resampledShares ? [resampledBandNote(resampledShares.length)] : []),
+    ],
   };
+}
+
+interface StatedAmount {
+  amount: number;
+  weight: number;
+}
+
+/**
+ * The share with WTP at or above each of the full sample's amounts in respondent resamples (for
+ * the curve's band), as many as the budget allows for that many amounts.
+ */
+function resampledStepShares(
+  stated: readonly StatedAmount[],
+  amounts: readonly number[],
+): number[][] | undefined {
+  const count = resampledCurveCount(amounts.length);
+  if (count === 0) return undefined;
+  const resamples = respondentResamples(stated, (s) => sharesAtOrAbove(s, amounts), count);
+  return resamples.every((r) => r !== null) ? resamples : undefined;
+}
+
+/** Weighted share with an amount at or above each price (prices ascending), in one sweep. */
+function sharesAtOrAbove(sample: readonly StatedAmount[], prices: readonly number[]): number[] {
+  const sorted = [...sample].sort((a, b) => a.amount - b.amount);
+  const total = sorted.reduce((sum, s) => sum + s.weight, 0);
+  let below = 0;
+  let next = 0;
+  return prices.map((price) => {
+    while (next < sorted.length && sorted[next].amount < price) below += sorted[next++].weight;
+    return compactShare((total - below) / total);
+  });
 }

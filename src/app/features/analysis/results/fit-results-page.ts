@@ -12,6 +12,7 @@ import { curveEnsemble } from '@shared/analysis/curve-ensemble';
 import { EstimateValue } from '../figures/estimate-value';
 import { ScheduleTable } from '../schedule/schedule-table';
 import { CoefficientTable } from './coefficient-table';
+import { DetailTableView } from './detail-table-view';
 import { CurveQuestionCard } from './curve-question-card';
 import { FitPicker } from './fit-picker';
 
@@ -20,6 +21,7 @@ import { FitPicker } from './fit-picker';
   selector: 'app-fit-results-page',
   imports: [
     CoefficientTable,
+    DetailTableView,
     CurveQuestionCard,
     DatePipe,
     DemandChart,
@@ -47,6 +49,10 @@ export class FitResultsPage {
     const result = this.result();
     return fit && result ? fitBandedCurve(result.methodLabel, fit.spec, result) : null;
   });
+  /** Whether the drawn curve has a band anywhere (a fit stored without one has none). */
+  protected readonly banded = computed(
+    () => this.curve()?.points.some((p) => p.low !== null && p.high !== null) ?? false,
+  );
   protected readonly ensemble = computed(() => {
     const result = this.result();
     return result?.curve ? curveEnsemble(result.curve, this.level()) : null;
