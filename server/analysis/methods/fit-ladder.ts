@@ -46,6 +46,7 @@ export function fitLadder(
     confidenceLevel: spec.confidenceLevel,
   });
   const logit = refitLogit(answers, scale);
+  const level = `${Math.round(spec.confidenceLevel * 1000) / 10} %`;
   const { logistic } = result;
   const optional = (
     label: string,
@@ -83,15 +84,28 @@ export function fitLadder(
     tables: [
       {
         title: 'Ladder steps',
-        columns: ['Price', 'Respondents', 'Purchase share', 'Revenue index'],
-        columnUnits: ['price', 'count', 'share', 'index'],
-        rows: result.steps.map((s) => [s.price, s.respondents, s.share, s.revenueIndex]),
+        columns: [
+          'Price',
+          'Respondents',
+          'Purchase share',
+          `${level} interval from`,
+          'to',
+          'Revenue index',
+        ],
+        columnUnits: ['price', 'count', 'share', 'share', 'share', 'index'],
+        rows: result.steps.map((s, j) => {
+          const { ciLow, ciHigh } = result.stepIntervals.shares[j];
+          return [s.price, s.respondents, s.share, ciLow, ciHigh, s.revenueIndex];
+        }),
       },
       {
         title: 'Arc elasticities between ladder prices',
-        columns: ['From price', 'To price', 'Arc elasticity'],
-        columnUnits: ['price', 'price', 'elasticity'],
-        rows: result.arcElasticities.map((a) => [a.fromPrice, a.toPrice, a.elasticity]),
+        columns: ['From price', 'To price', 'Arc elasticity', `${level} interval from`, 'to'],
+        columnUnits: ['price', 'price', 'elasticity', 'elasticity', 'elasticity'],
+        rows: result.arcElasticities.map((a, j) => {
+          const { ciLow, ciHigh } = result.stepIntervals.arcElasticities[j];
+          return [a.fromPrice, a.toPrice, a.elasticity, ciLow, ciHigh];
+        }),
       },
     ],
     residuals: [],

@@ -30,31 +30,11 @@ export function gridMaximumInterval(
   resamples = GRID_MAXIMUM_RESAMPLES,
   seed = 20_240_611,
 ): GridMaximumInterval {
-  const levels = [...new Set(sample.prices)].sort((a, b) => a - b);
-  const column = new Map(levels.map((price, j) => [price, j]));
-  // Per respondent, their weight sum and weighted purchases at each ladder price.
-  const byRespondent = new Map<string | number, { weight: Float64Array; bought: Float64Array }>();
-  sample.respondents.forEach((respondent, i) => {
-    let own = byRespondent.get(respondent);
-    if (!own) {
-      own = { weight: new Float64Array(levels.length), bought: new Float64Array(levels.length) };
-      byRespondent.set(respondent, own);
-    }
-    const j = column.get(sample.prices[i])!;
-    own.weight[j] += sample.weights[i];
-    own.bought[j] += sample.weights[i] * sample.probabilities[i];
-  });
+  const { levels, people } = ladderTotalsByRespondent(sample);
   const weight = new Float64Array(levels.length);
   const bought = new Float64Array(levels.length);
-  const bestPrice = (people: readonly { weight: Float64Array; bought: Float64Array }[]) => {
-    weight.fill(0);
-    bought.fill(0);
-    for (const person of people) {
-      for (let j = 0; j < levels.length; j++) {
-        weight[j] += person.weight[j];
-        bought[j] += person.bought[j];
-      }
-    }
+  const bestPrice = (drawn: readonly RespondentLadderTotals[]) => {
+    sumTotals(drawn, weight, bought);
     let best: number | null = null;
     let bestValue = -Infinity;
     for (let j = 0; j < levels.length; j++) {
@@ -65,13 +45,52 @@ export function gridMaximumInterval(
     }
     return { price: best };
   };
-  const { price } = respondentBootstrap(
-    [...byRespondent.values()],
-    ['price'],
-    bestPrice,
-    level,
-    resamples,
-    seed,
-  );
+  const { price } = respondentBootstrap(people, ['price'], bestPrice, level, resamples, seed);
   return { ...price, resamples };
+}
+
+/** One respondent's weight and weighted purchases at each ladder price (by `levels`). */
+export interface RespondentLadderTotals {
+  readonly weight: Float64Array;
+  readonly bought: Float64Array;
+}
+
+/**
+ * The ladder prices (ascending) and each respondent's totals at them: what a resample of
+ * respondents adds up, all of a respondent's answers together.
+ */
+export function ladderTotalsByRespondent(sample: LadderSample): {
+  levels: number[];
+  people: RespondentLadderTotals[];
+} {
+  const levels = [...new Set(sample.prices)].sort((a, b) => a - b);
+  const column = new Map(levels.map((price, j) => [price, j]));
+  const byRespondent = new Map<string | number, RespondentLadderTotals>();
+  sample.respondents.forEach((respondent, i) => {
+    let own = byRespondent.get(respondent);
+    if (!own) {
+      own = { weight: new Float64Array(levels.length), bought: new Float64Array(levels.length) };
+      byRespondent.set(respondent, own);
+    }
+    const j = column.get(sample.prices[i])!;
+    own.weight[j] += sample.weights[i];
+    own.bought[j] += sample.weights[i] * sample.probabilities[i];
+  });
+  return { levels, people: [...byRespondent.values()] };
+}
+
+/** Adds drawn respondents' totals into `weight` and `bought` (cleared first). */
+export function sumTotals(
+  drawn: readonly RespondentLadderTotals[],
+  weight: Float64Array,
+  bought: Float64Array,
+): void {
+  weight.fill(0);
+  bought.fill(0);
+  for (const person of drawn) {
+    for (let j = 0; j < weight.length; j++) {
+      weight[j] += person.weight[j];
+      bought[j] += person.bought[j];
+    }
+  }
 }

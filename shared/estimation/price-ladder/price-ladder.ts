@@ -21,6 +21,7 @@ import {
   type LogisticPurchaseSummary,
 } from './logistic-purchase-curve';
 import { gridMaximumInterval, type GridMaximumInterval } from './grid-maximum-interval';
+import { ladderStepIntervals, type LadderStepIntervals } from './ladder-step-intervals';
 import { enforceMonotone, type MonotoneRule } from './monotone-answers';
 
 export interface PriceLadderSpec {
@@ -51,6 +52,8 @@ export interface PriceLadderResult {
   readonly profitMaxPrice: number | null;
   readonly profitMaxPriceInterval: GridMaximumInterval | null;
   readonly arcElasticities: ArcStep[];
+  /** Intervals of each step's share and arc elasticity (respondent bootstrap). */
+  readonly stepIntervals: LadderStepIntervals;
   readonly logistic: LogisticPurchaseSummary;
   readonly curve: FittedDemandCurve;
   readonly warnings: string[];
@@ -103,6 +106,7 @@ export function analysePriceLadder(spec: PriceLadderSpec): PriceLadderResult {
         ? null
         : gridMaximumInterval(sample, (price, share) => (price - unitCost) * share, level),
     arcElasticities: arcSteps(steps),
+    stepIntervals: ladderStepIntervals(sample, level),
     logistic,
     curve: logisticPurchaseCurve(fit, fit.robustCovariance, observed, n),
     warnings: logistic.revenueMaxPrice
@@ -122,7 +126,7 @@ function ladderAssumptions(
       ? `intent calibrated to purchase probability ${JSON.stringify(calibration)}`
       : 'answers are 0/1 purchase decisions',
     `monotone rule '${rule}' applied per respondent`,
-    'grid maxima: ties go to the lowest price; their intervals from 1,000 respondent resamples (percentile bootstrap, seeded)',
+    'grid maxima: ties go to the lowest price; their intervals, and those of the step shares and arc elasticities, from 1,000 respondent resamples (percentile bootstrap, seeded)',
     'arc elasticities by the midpoint formula',
     'logistic purchase curve by maximum likelihood (fractional logit when intent is calibrated)',
     `standard errors cluster-robust by respondent (${clusters} clusters, factor G/(G−1)); intervals normal (delta method)`,
