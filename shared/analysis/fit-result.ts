@@ -39,12 +39,14 @@ export const detailColumnUnits = [
 
 /**
  * A method's own table (ladder steps, threshold curves…), ready to show as it is. Each column
- * may name its unit; fits stored before units were given show plain numbers.
+ * may name its unit; fits stored before units were given show plain numbers. `plot: 'lines'`
+ * asks for the other columns drawn as lines against the first (the threshold curves).
  */
 export const detailTableSchema = z.object({
   title: z.string(),
   columns: z.array(z.string()),
   columnUnits: z.array(z.enum(detailColumnUnits)).optional(),
+  plot: z.enum(['lines']).optional(),
   rows: z.array(z.array(z.union([finite, z.string(), z.null()]))),
 });
 export type DetailTable = z.infer<typeof detailTableSchema>;

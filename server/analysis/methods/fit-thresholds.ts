@@ -77,6 +77,7 @@ export function fitThresholds(
         title: 'Price threshold curves',
         columns: ['Price', 'Too cheap', 'Cheap', 'Expensive', 'Too expensive'],
         columnUnits: ['price', 'share', 'share', 'share', 'share'],
+        plot: 'lines',
         rows: curves.prices.map((p, i) => [
           p,
           curves.tooCheap[i],

@@ -79,6 +79,17 @@ describe('bands of tabulated demand curves from respondent resamples', () => {
       expect(band.low).toBeLessThan(curve.quantity(peak.estimate));
       return band.high - band.low;
     };
+    const [curves] = fitThresholds(
+      dataset('price-thresholds', answers),
+      thresholdSpec,
+      null,
+    ).tables;
+    // The four curves go to the screen as lines against price, shares as shares.
+    expect(curves).toMatchObject({
+      columns: ['Price', 'Too cheap', 'Cheap', 'Expensive', 'Too expensive'],
+      columnUnits: ['price', 'share', 'share', 'share', 'share'],
+      plot: 'lines',
+    });
     const quadrupled = [0, 1, 2, 3].flatMap((copy) =>
       answers.map((a) => ({ ...a, interviewId: `${a.interviewId}-${copy}` })),
     );

@@ -1,8 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import { BaseChartDirective } from 'ng2-charts';
 import type { BandedCurve } from './banded-curve';
 import { demandChartData } from './demand-chart-data';
 import { demandChartOptions, type AxisTitles } from './demand-chart-options';
+import { LineChartCanvas } from './line-chart-canvas';
 
 /**
  * One or more demand curves with their bands (and the first one's revenue when asked), drawn
@@ -11,19 +11,10 @@ import { demandChartOptions, type AxisTitles } from './demand-chart-options';
  */
 @Component({
   selector: 'app-demand-chart',
-  imports: [BaseChartDirective],
+  imports: [LineChartCanvas],
   template: `
     <figure class="chart">
-      <div class="chart__canvas">
-        <canvas
-          baseChart
-          type="line"
-          role="img"
-          [attr.aria-label]="summary()"
-          [data]="data()"
-          [options]="options()"
-        ></canvas>
-      </div>
+      <app-line-chart-canvas [data]="data()" [options]="options()" [summary]="summary()" />
       @if (caption()) {
         <figcaption class="chart__caption">{{ caption() }}</figcaption>
       }
@@ -32,10 +23,6 @@ import { demandChartOptions, type AxisTitles } from './demand-chart-options';
   styles: `
     .chart {
       margin: 0;
-    }
-    .chart__canvas {
-      position: relative;
-      height: var(--chart-height, 340px);
     }
     .chart__caption {
       margin-top: 8px;

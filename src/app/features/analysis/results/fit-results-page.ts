@@ -12,6 +12,7 @@ import { curveEnsemble } from '@shared/analysis/curve-ensemble';
 import { EstimateValue } from '../figures/estimate-value';
 import { ScheduleTable } from '../schedule/schedule-table';
 import { CoefficientTable } from './coefficient-table';
+import { DetailLinesChart } from '../charts/detail-lines-chart';
 import { DetailTableView } from './detail-table-view';
 import { CurveQuestionCard } from './curve-question-card';
 import { FitPicker } from './fit-picker';
@@ -21,6 +22,7 @@ import { FitPicker } from './fit-picker';
   selector: 'app-fit-results-page',
   imports: [
     CoefficientTable,
+    DetailLinesChart,
     DetailTableView,
     CurveQuestionCard,
     DatePipe,

@@ -1,10 +1,10 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import type { ChartOptions } from 'chart.js';
-import { BaseChartDirective } from 'ng2-charts';
 import type { DemandCurve } from '@shared/estimation/welfare/demand-curve';
 import type { PolicyIncidence } from '@shared/estimation/welfare/policy-incidence';
 import type { SupplyCurve } from '@shared/estimation/welfare/supply-curve';
 import { chartColours } from '../charts/chart-palette';
+import { LineChartCanvas } from '../charts/line-chart-canvas';
 import { policyChartData } from './policy-chart-data';
 import type { PolicyKind } from './policy-simulation';
 
@@ -13,24 +13,14 @@ const font = { family: "'Fira Sans', system-ui, sans-serif", size: 13 };
 /** Supply and demand with the policy's wedge and deadweight loss shaded. */
 @Component({
   selector: 'app-policy-chart',
-  imports: [BaseChartDirective],
+  imports: [LineChartCanvas],
   template: `
-    <div class="policy-chart">
-      <canvas
-        baseChart
-        type="line"
-        role="img"
-        [attr.aria-label]="summary()"
-        [data]="data()"
-        [options]="options()"
-      ></canvas>
-    </div>
-  `,
-  styles: `
-    .policy-chart {
-      position: relative;
-      height: var(--chart-height, 380px);
-    }
+    <app-line-chart-canvas
+      style="--chart-height: 380px"
+      [data]="data()"
+      [options]="options()"
+      [summary]="summary()"
+    />
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
