@@ -1,26 +1,26 @@
 import { HttpClient, provideHttpClient, withInterceptors } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
-import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, provideRouter } from '@angular/router';
 import { signInAs } from '../testing/sign-in-as';
 import { withoutErrorNotice } from './error-notice-context';
 import { errorInterceptor } from './error-interceptor';
+import { Notices } from './notices';
 import { Session } from './session';
 
 describe('errorInterceptor', () => {
   let http: HttpClient;
   let server: HttpTestingController;
-  const open = vi.fn();
+  const show = vi.fn();
 
   beforeEach(() => {
-    open.mockReset();
+    show.mockReset();
     TestBed.configureTestingModule({
       providers: [
         provideHttpClient(withInterceptors([errorInterceptor])),
         provideHttpClientTesting(),
         provideRouter([]),
-        { provide: MatSnackBar, useValue: { open } },
+        { provide: Notices, useValue: { show } },
       ],
     });
     http = TestBed.inject(HttpClient);
@@ -43,23 +43,19 @@ describe('errorInterceptor', () => {
       error: { code: 'study-locked', message: 'This study is published and locked.' },
     };
     expect(failWith(409, body)).toBeDefined();
-    expect(open).toHaveBeenCalledWith(
-      'This study is published and locked.',
-      'Close',
-      expect.anything(),
-    );
+    expect(show).toHaveBeenCalledWith('This study is published and locked.');
   });
 
   it('explains a server failure that came without a body', async () => {
     await signInAs(['admin']);
     failWith(503, null);
-    expect(open.mock.calls[0][0]).toBe('The server ran into a problem. Try again in a moment.');
+    expect(show.mock.calls[0][0]).toBe('The server ran into a problem. Try again in a moment.');
   });
 
   it('stays quiet when the caller shows the error itself', async () => {
     await signInAs(['admin']);
     failWith(400, { error: { code: 'invalid', message: 'Bad', issues: [] } }, true);
-    expect(open).not.toHaveBeenCalled();
+    expect(show).not.toHaveBeenCalled();
   });
 
   it('turns a 401 into the signed-out state and goes to the welcome page', async () => {
@@ -67,7 +63,7 @@ describe('errorInterceptor', () => {
     const navigate = vi.spyOn(TestBed.inject(Router), 'navigate').mockResolvedValue(true);
     failWith(401, { error: { code: 'unauthenticated', message: 'Sign in first.' } }, true);
     expect(TestBed.inject(Session).current().status).toBe('signed-out');
-    expect(open.mock.calls[0][0]).toContain('Your session has ended');
+    expect(show.mock.calls[0][0]).toContain('Your session has ended');
     expect(navigate).toHaveBeenCalledWith(['/welcome'], { queryParams: { returnTo: '/' } });
   });
 });
