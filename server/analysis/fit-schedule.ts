@@ -24,7 +24,11 @@ export function fitSchedule(
   confidenceLevel: number,
   evidence: readonly RespondentEvidence[],
   designLevels: readonly number[] | null,
+  currency: string,
 ): ScheduleOutcome {
+  const money = priceWriter(currency);
+  const list = (prices: readonly number[]) =>
+    prices.slice(0, 8).map(money).join(', ') + (prices.length > 8 ? ', …' : '');
   const built = buildDemandSchedule(nonNegativeBand(curve), grid, confidenceLevel);
   const prices = built.rows.map((row) => row.price);
   const support = cellSupport(prices, evidence, designLevels ?? undefined);
@@ -34,7 +38,7 @@ export function fitSchedule(
   if (outside.length > 0) {
     warnings.push(
       `${outside.length} grid price(s) lie outside the observed prices ` +
-        `${built.observedPriceRange.min}–${built.observedPriceRange.max} and are extrapolation: ${list(outside)}`,
+        `${money(built.observedPriceRange.min)}–${money(built.observedPriceRange.max)} and are extrapolation: ${list(outside)}`,
     );
   }
   const thin = rows.filter((row) => row.respondents < minimumCellRespondents);
@@ -57,12 +61,20 @@ export function fitSchedule(
   };
 }
 
-const list = (prices: readonly number[]) =>
-  prices
-    .slice(0, 8)
-    .map((p) => String(round(p)))
-    .join(', ') + (prices.length > 8 ? ', …' : '');
-const round = (p: number) => Math.round(p * 1e6) / 1e6;
+/**
+ * Prices as the warnings name them: with the study's currency code, grouped, to at most two
+ * decimals ("KES 3,650"), as a researcher reads them anywhere.
+ */
+function priceWriter(currency: string): (price: number) => string {
+  const format = new Intl.NumberFormat('en', {
+    style: 'currency',
+    currency,
+    currencyDisplay: 'code',
+    maximumFractionDigits: 2,
+    trailingZeroDisplay: 'stripIfInteger',
+  } as Intl.NumberFormatOptions);
+  return (price) => format.format(price);
+}
 
 /** A band that never goes below zero and always contains the prediction (a clipped linear curve). */
 function nonNegativeBand(curve: FittedDemandCurve): FittedDemandCurve {

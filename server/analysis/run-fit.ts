@@ -71,6 +71,7 @@ export function estimateFit(prepared: PreparedFit, spec: FitSpec): FitResult {
         spec.confidenceLevel,
         fit.evidence,
         dataset.designLevels,
+        prepared.currency,
       )
     : null;
   return fitResultSchema.parse({

@@ -226,6 +226,11 @@ describe('fits the data refuses', () => {
     const grid = Array.from({ length: 10 }, (_, k) => 400 + 400 * k);
     // The ladder asked 800 to 2600 KES (the demo questionnaire), so the rest is extrapolation.
     expect(flagged).toEqual(grid.filter((p) => p < 800 || p > 2600));
-    expect(result.warnings.some((w) => w.includes('extrapolation'))).toBe(true);
+    // Prices are named in the study's currency (a no-break space keeps code and amount together).
+    const kes = (amount: string) => `KES\u00a0${amount}`;
+    expect(result.warnings).toContain(
+      `5 grid price(s) lie outside the observed prices ${kes('800')}–${kes('2,600')} and are ` +
+        `extrapolation: ${['400', '2,800', '3,200', '3,600', '4,000'].map(kes).join(', ')}`,
+    );
   });
 });
