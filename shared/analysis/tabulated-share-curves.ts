@@ -45,6 +45,7 @@ export function stepShareCurve(curve: {
     observedPriceRange: curve.observedPriceRange,
     n: curve.n,
     discrete: true,
+    steps: prices,
   };
 }
 

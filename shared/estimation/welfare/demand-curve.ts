@@ -33,4 +33,10 @@ export interface DemandCurve {
   readonly closedForm?: LinearDemandForm | ConstantElasticityForm;
   /** True for a step function (an empirical curve): it has no slope or point elasticity. */
   readonly discrete?: boolean;
+  /**
+   * For a step function that holds its value up to each step, Q(P) = Q(step) on the interval
+   * ending at it: the prices of the steps, ascending. (P − c)·Q(P) rises across each interval,
+   * so its maxima lie on these prices.
+   */
+  readonly steps?: readonly number[];
 }

@@ -25,6 +25,7 @@ export function optimalPrice(curve: DemandCurve, unitCost = 0): number {
     if (unitCost === 0) throw noInterior(curve, 'revenue falls at every price when ε < −1');
     return inverseElasticityPrice(unitCost, form.elasticity);
   }
+  if (curve.discrete) return stepOptimalPrice(curve, unitCost);
   const range = requirePriceRange(curve);
   const lo = Math.max(range.min, unitCost);
   const best = maximiseOnInterval((p) => (p - unitCost) * curve.quantity(p), lo, range.max);
@@ -32,6 +33,29 @@ export function optimalPrice(curve: DemandCurve, unitCost = 0): number {
   if (best.x - lo < edge || range.max - best.x < edge)
     throw noInterior(curve, 'the maximum is on the edge of the price range');
   return polishOnFirstOrderCondition(curve, unitCost, best.x, edge);
+}
+
+/**
+ * The best price of a step curve: (P − c)·Q(P) rises across each step's interval, so the best
+ * of the step prices above the unit cost is the maximum (ties to the lowest price, as for a
+ * ladder grid). A curve without its step prices, or with no positive margin at any, has none.
+ */
+function stepOptimalPrice(curve: DemandCurve, unitCost: number): number {
+  if (!curve.steps) {
+    throw new EstimationError(
+      'not-differentiable',
+      `${curve.description} is a step function whose steps are not known`,
+      'price',
+    );
+  }
+  let best: number | null = null;
+  let bestValue = 0;
+  for (const price of curve.steps) {
+    const value = (price - unitCost) * curve.quantity(price);
+    if (value > bestValue) [best, bestValue] = [price, value];
+  }
+  if (best === null) throw noInterior(curve, 'no step price leaves a positive margin');
+  return best;
 }
 
 /**

@@ -6,6 +6,7 @@ import { inverseElasticityPrice, lernerIndex, optimalPrice } from './optimal-pri
 import { marginalRevenue, pointElasticity } from './point-elasticity';
 import { constantElasticityDemand, linearDemand, logisticShareDemand } from './standard-curves';
 import { refusalOf } from '../../../tests/support/estimation-refusal';
+import { empiricalWtpCurve } from '../willingness-to-pay/open-ended-wtp';
 
 const near = (actual: number, expected: number, tol: number = ew.tolerance) =>
   expect(Math.abs(actual - expected)).toBeLessThan(tol);
@@ -133,5 +134,36 @@ describe('numerical paths on a logistic share curve', () => {
       discrete: true,
     };
     expect(refusalOf(() => pointElasticity(step, 2))).toMatchObject({ code: 'not-differentiable' });
+  });
+});
+
+describe('optimal price on an empirical (step) WTP curve', () => {
+  // Five stated amounts, equal weights: 3 at 10, one at 20, one at 30.
+  const curve = empiricalWtpCurve([10, 10, 10, 20, 30], [1, 1, 1, 1, 1]);
+
+  /** A second reading: (P − c)·Q(P) on a fine grid that contains every amount. */
+  function bruteForce(unitCost: number): number {
+    let best = 0;
+    let bestValue = 0;
+    for (let k = 0; k <= 40_000; k++) {
+      const p = k / 1000;
+      const value = (p - unitCost) * curve.quantity(p);
+      if (value > bestValue + 1e-12) [best, bestValue] = [p, value];
+    }
+    return best;
+  }
+
+  it('finds the best stated amount, as a search over every price does', () => {
+    // Revenue: 10 × 1 = 10, 20 × 0.4 = 8, 30 × 0.2 = 6. At unit cost 5: 5, 6 and 5.
+    expect(optimalPrice(curve)).toBe(10);
+    expect(optimalPrice(curve, 5)).toBe(20);
+    expect(bruteForce(0)).toBe(10);
+    expect(bruteForce(5)).toBe(20);
+  });
+
+  it('has no optimum when no stated amount is above the unit cost', () => {
+    expect(refusalOf(() => optimalPrice(curve, 30))).toMatchObject({
+      code: 'no-interior-maximum',
+    });
   });
 });

@@ -73,6 +73,7 @@ export function empiricalWtpCurve(
     observedPriceRange: { min: Math.min(...wtp), max },
     n: wtp.length,
     discrete: true,
+    steps: [...new Set(wtp)].sort((a, b) => a - b),
   };
 }
 
