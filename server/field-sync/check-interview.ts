@@ -1,4 +1,5 @@
 import { fieldInterviewSchema, type FieldInterview } from '@shared/field-sync/field-interview';
+import { fitsFieldInterview } from '@shared/field-sync/field-interview-fits';
 import { photoManifestProblems } from '@shared/field-sync/photo-references';
 import type { LatLng } from '@shared/field-sync/quality/great-circle-distance';
 import type { EnumeratorScope } from './enumerator-scope';
@@ -30,7 +31,11 @@ export function rawIdOf(raw: unknown): string | null {
  * the answers. The first failing step refuses the item with all of its issues.
  */
 export function checkInterview(raw: unknown, context: CheckContext): CheckedInterview | Rejection {
-  const parsed = fieldInterviewSchema.safeParse(raw);
+  // The quick test passes the usual interview without building zod's result; whatever it does
+  // not pass, the schema judges (and words the refusal).
+  const parsed = fitsFieldInterview(raw)
+    ? { success: true as const, data: raw }
+    : fieldInterviewSchema.safeParse(raw);
   if (!parsed.success) {
     const issues = parsed.error.issues.map((issue) => ({
       path: issue.path.map(String).join('.') || 'interview',
