@@ -1,5 +1,4 @@
 import { TestBed } from '@angular/core/testing';
-import type { FieldQuestionnaireVersion } from '@shared/field-sync/field-assignments';
 import { assignBid } from '@shared/questionnaire/bid-assignment';
 import type { Block, BlockOfKind } from '@shared/questionnaire/block';
 import { starterBlock } from '@shared/questionnaire/block-starters';
@@ -7,7 +6,7 @@ import { Session } from '../../../core/session';
 import { GpsReader } from '../capture/gps-reader';
 import { FieldDb } from '../data/field-db';
 import { FieldStore } from '../data/field-store';
-import { pointId, routeId, studyId, versionId } from '../testing/field-fixtures';
+import { fieldVersion, pointId, routeId, studyId, versionId } from '../testing/field-fixtures';
 import { InterviewDrafts } from './interview-drafts';
 
 const place = { studyId, routeId, pointId, questionnaireVersionId: versionId };
@@ -16,15 +15,7 @@ const blocks = [
   starterBlock('dichotomous-choice', 'bid'),
   starterBlock('number', 'count'),
 ] as Block[];
-const version: FieldQuestionnaireVersion = {
-  id: versionId,
-  questionnaireId: crypto.randomUUID(),
-  studyId,
-  title: 'Lamp survey',
-  version: 1,
-  publishedAt: '2027-03-01T08:00:00Z',
-  definition: { blocks },
-};
+const version = fieldVersion(blocks);
 const fix = { latitude: -1.2921, longitude: 36.8219, accuracyMetres: 12, capturedAt: '' };
 
 describe('InterviewDrafts', () => {

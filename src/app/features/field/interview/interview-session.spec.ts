@@ -6,7 +6,7 @@ import { Session } from '../../../core/session';
 import { AssignmentsCache } from '../assignments/assignments-cache';
 import { GpsReader } from '../capture/gps-reader';
 import { FieldStore } from '../data/field-store';
-import { pointId, routeId, studyId, versionId } from '../testing/field-fixtures';
+import { fieldVersion, pointId, routeId, studyId, versionId } from '../testing/field-fixtures';
 import { InterviewDrafts } from './interview-drafts';
 import { InterviewSession } from './interview-session';
 
@@ -15,17 +15,7 @@ const assignments = {
   enumerator: { userId: crypto.randomUUID(), name: 'Enumerator' },
   studies: [],
   routes: [],
-  questionnaireVersions: [
-    {
-      id: versionId,
-      questionnaireId: crypto.randomUUID(),
-      studyId,
-      title: 'Lamp survey',
-      version: 1,
-      publishedAt: '2027-03-01T08:00:00Z',
-      definition: { blocks },
-    },
-  ],
+  questionnaireVersions: [fieldVersion(blocks)],
   generatedAt: '2027-03-01T08:00:00Z',
 } satisfies FieldAssignments;
 
