@@ -1,5 +1,10 @@
-import type { ChildProcess } from 'node:child_process';
-import { readdirSync, readFileSync } from 'node:fs';
+import { spawn, type ChildProcess } from 'node:child_process';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import { freePort } from '../../tools/stack/free-port';
+import { serverCommand } from '../../tools/stack/server-build';
+import { checkoutRoot } from '../../tools/stack/state-dir';
 import { startCompiledServer, type RunningServer } from '../support/compiled-server';
 
 /** The compiled server with two web processes, as two cores would run it. */
@@ -82,5 +87,30 @@ describe('web processes sharing the port', () => {
     await exited(server.child);
     await until(() => copies.every((pid) => !alive(pid)), 'orphaned web processes to end');
     await expect(fetch(`${server.url}/api/health`)).rejects.toThrow();
+  });
+
+  it('stops with an error, instead of starting copies again and again, when none can serve', async () => {
+    // The built app is missing, so every copy fails as it starts.
+    const emptyBuild = mkdtempSync(join(tmpdir(), 'fieldcurve-no-build-'));
+    try {
+      const port = await freePort();
+      const [command, args] = await serverCommand('main');
+      const child = spawn(command, args, {
+        cwd: checkoutRoot,
+        env: {
+          ...process.env,
+          HOST: '127.0.0.1',
+          PORT: String(port),
+          APP_URL: `http://127.0.0.1:${port}`,
+          STATIC_DIR: emptyBuild,
+          WEB_PROCESSES: '2',
+        },
+        stdio: ['ignore', 'ignore', 'ignore'],
+      });
+      expect(await exited(child)).toBe(1);
+      await until(() => webProcesses(child.pid!).length === 0, 'no web process left');
+    } finally {
+      rmSync(emptyBuild, { recursive: true, force: true });
+    }
   });
 });
