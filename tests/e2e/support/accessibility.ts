@@ -14,6 +14,13 @@ interface Violation {
  * app's content security policy (scripts from its own origin only) does not apply to.
  */
 export async function expectNoSeriousViolations(page: Page, where: string): Promise<void> {
+  // A snack bar holds its text in an aria-hidden element for its first 150 ms, then hands it to
+  // its live region: check the page at rest, once no notice is still waiting to be announced.
+  await page.waitForFunction(
+    () => !document.querySelector('.mat-mdc-snack-bar-label > [aria-hidden="true"]'),
+    undefined,
+    { timeout: 5_000 },
+  );
   await page.evaluate(axe.source);
   const violations = await page.evaluate(async () => {
     const result = await (
