@@ -48,7 +48,13 @@ export interface SqlRunner {
   }>;
 }
 
-/** A drizzle database or transaction: the fit runs its passes in one (nested) transaction. */
+/**
+ * A drizzle database or transaction: the fit runs its passes in one (nested) transaction. A
+ * database opens it read-only at REPEATABLE READ; a savepoint keeps its caller's isolation.
+ */
 export interface FitDatabase {
-  transaction<T>(run: (tx: SqlRunner) => Promise<T>): Promise<T>;
+  transaction<T>(
+    run: (tx: SqlRunner) => Promise<T>,
+    config?: { isolationLevel?: 'repeatable read'; accessMode?: 'read only' },
+  ): Promise<T>;
 }

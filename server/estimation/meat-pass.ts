@@ -26,11 +26,14 @@ export interface Meat {
  * coefficients, and the meat of the sandwich is summed where the rows are — the scores
  * s = w·e·z (z = [1, u…], w = 1 unweighted) per row for HC1, or first totalled per cluster
  * (GROUP BY) and then multiplied out for cluster-robust errors. Only sums leave the database.
+ * `rows` is the first pass's row count: the fit session reads one snapshot, and the first pass
+ * refused any NULL, so these aggregates see the same rows.
  */
 export async function meatPass(
   runner: SqlRunner,
   model: ResolvedModel,
   input: MeatInput,
+  rows: number,
 ): Promise<Meat> {
   const scores = scoreRows(model, input);
   const p = model.regressors.length + (model.intercept ? 1 : 0);
@@ -38,7 +41,7 @@ export async function meatPass(
   if (!model.cluster) {
     const row = (await runner.execute(sql`SELECT ${symmetricSumsSelect(refs)} FROM ${scores}`))
       .rows[0];
-    return { matrix: meatMatrix(row, p), clusters: null };
+    return { matrix: meatMatrix(row, p, rows), clusters: null };
   }
   const totals = refs.map((s) => sql`sum(${s}) AS ${s}`);
   const row = (
@@ -57,7 +60,7 @@ export async function meatPass(
       model.cluster.column,
     );
   }
-  return { matrix: meatMatrix(row, p), clusters };
+  return { matrix: meatMatrix(row, p, clusters), clusters };
 }
 
 /**
@@ -116,8 +119,8 @@ export async function residualSquares(
   return Number(row['rss']);
 }
 
-function meatMatrix(row: Record<string, unknown>, p: number): number[][] {
-  const sums = readSymmetricSums(row, p);
+function meatMatrix(row: Record<string, unknown>, p: number, rows: number): number[][] {
+  const sums = readSymmetricSums(row, p, rows);
   if (!sums) throw new InputProblem('a score sum is not finite');
   return sums.products.map((r) => r.map((v) => v.toNumber()));
 }

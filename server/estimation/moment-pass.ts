@@ -44,16 +44,21 @@ export async function momentPass(runner: SqlRunner, model: ResolvedModel): Promi
   const weights = model.weights?.value;
   const variables: SQL[] = weights ? [sql.raw('r'), ...refs.map((v) => sql`r * ${v}`)] : refs;
   const weightColumns = weights ? [sql`${weights} AS w`, sql`sqrt(${weights}) AS r`] : [];
+  // The paired aggregates skip a row with a NULL; this count finds one. IS NULL tests are
+  // evaluated inline, and the count's transition runs only for such a row.
+  const missing = [...refs, ...(weights ? [sql.raw('w')] : [])].map((v) => sql`${v} IS NULL`);
   // OFFSET NULL keeps the subquery from being merged into the aggregates (each shifted value is
   // computed once per row, not once per sum) while leaving the scan free to run in parallel.
-  const query = sql`SELECT count(*) AS rows, ${weights ? sql`min(w) AS wmin, ` : sql``}
+  const query = sql`SELECT count(*) AS rows,
+    count(*) FILTER (WHERE ${sql.join(missing, sql` OR `)}) AS incomplete,
+    ${weights ? sql`min(w) AS wmin, ` : sql``}
     ${symmetricSumsSelect(variables)}
     FROM (SELECT ${sql.join([...weightColumns, ...shifted], sql`, `)}
           FROM ${model.from} OFFSET NULL) AS shifted`;
   const row = (await runner.execute(query)).rows[0];
   const n = Number(row['rows']);
-  const sums = readSymmetricSums(row, variables.length);
-  if (!sums || sums.counts.some((c) => c !== n) || (weights && !(Number(row['wmin']) > 0))) {
+  const sums = readSymmetricSums(row, variables.length, n);
+  if (!sums || Number(row['incomplete']) > 0 || (weights && !(Number(row['wmin']) > 0))) {
     throw new InputProblem('a NULL, non-finite or non-positive value reached the sums');
   }
   const products = weights ? sums.products : withConstant(n, sums.linear, sums.products);

@@ -16,7 +16,7 @@ export async function robustFit(
   shifted: ShiftedSolution,
   base: LinearFit,
 ): Promise<LinearFit> {
-  const meat = await meatPass(runner, model, shifted);
+  const meat = await meatPass(runner, model, shifted, base.n);
   const { matrix, summary } = robustCovariance({
     inverseGram: shifted.inverseGram,
     meat,

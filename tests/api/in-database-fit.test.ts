@@ -185,6 +185,49 @@ describe('fitInDatabase agrees with fitLinearModel on the same rows (to 1e-9 rel
     expect(rowsSeen.length).toBeGreaterThanOrEqual(4); // describe, shifts, sums, meat
     expect(Math.max(...rowsSeen)).toBe(1);
   });
+
+  it('reads one snapshot: rows synced between its passes do not reach the second pass', async () => {
+    // A table every connection sees, and a second connection that writes while the fit runs.
+    const shared = 'demand_rows_during_fit';
+    await db.execute(
+      sql`CREATE TABLE ${sql.identifier(shared)} AS SELECT * FROM ${sql.identifier(TABLE)}`,
+    );
+    const writer = connectDatabase(process.env['DATABASE_URL']!, 1);
+    try {
+      let written = false;
+      const interleaved: FitDatabase = {
+        transaction: (run, config) =>
+          db.transaction(
+            (tx) =>
+              run({
+                execute: async (query) => {
+                  const result = await tx.execute(query);
+                  // Right after the first pass (its row carries the NULL count), a sync lands.
+                  if (!written && result.rows[0] && 'incomplete' in result.rows[0]) {
+                    written = true;
+                    await writer.execute(sql`INSERT INTO ${sql.identifier(shared)}
+                      SELECT id + ${ROWS}, qty * 3, price, income, shelf, region, weight
+                      FROM ${sql.identifier(shared)} WHERE id <= 200`);
+                  }
+                  return result;
+                },
+              }),
+            config,
+          ),
+      };
+      const fit = await fitInDatabase(interleaved, {
+        ...demandModel,
+        source: { table: shared },
+        standardErrors: { type: 'hc1' },
+      });
+      expect(written).toBe(true);
+      const expected = inMemoryFit(await inMemoryColumns(), { standardErrors: { type: 'hc1' } });
+      expectAgreement(fit, expected);
+    } finally {
+      await writer.$client.end();
+      await db.execute(sql`DROP TABLE ${sql.identifier(shared)}`);
+    }
+  });
 });
 
 describe('fitInDatabase on NIST StRD Norris stored in a table', () => {
