@@ -1,3 +1,4 @@
+import { sortedQuantile } from '../estimation/resampling/sorted-quantile';
 import type { DemandCurve } from '../estimation/welfare/demand-curve';
 
 /** A figure shown to a researcher or client: always an estimate, with its interval when known. */
@@ -17,14 +18,6 @@ export interface CurveEnsemble {
   /** Draws asked for; those whose parameters give no valid curve count as having no value. */
   readonly requested: number;
   readonly confidenceLevel: number;
-}
-
-/** The q-quantile of sorted values by linear interpolation between order statistics. */
-export function quantileOfSorted(sorted: readonly number[], q: number): number {
-  const position = (sorted.length - 1) * q;
-  const below = Math.floor(position);
-  const above = Math.min(below + 1, sorted.length - 1);
-  return sorted[below] + (sorted[above] - sorted[below]) * (position - below);
 }
 
 // Below this share of usable draws the percentiles would describe a selected subset only.
@@ -83,8 +76,8 @@ function withInterval(
   const tail = (1 - ensemble.confidenceLevel) / 2;
   return {
     estimate,
-    low: quantileOfSorted(values, tail),
-    high: quantileOfSorted(values, 1 - tail),
+    low: sortedQuantile(values, tail),
+    high: sortedQuantile(values, 1 - tail),
     note: null,
   };
 }

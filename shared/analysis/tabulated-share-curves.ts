@@ -3,7 +3,7 @@ import type {
   QuantityInterval,
 } from '../estimation/demand-schedule/fitted-demand-curve';
 import { EstimationError } from '../estimation/estimation-error';
-import { quantileOfSorted } from './estimated-figure';
+import { sortedQuantile } from '../estimation/resampling/sorted-quantile';
 
 interface Range {
   readonly min: number;
@@ -115,7 +115,7 @@ function bandOf(
     quantityInterval: (price, level) => {
       const values = resampled.map((row) => shareAt(row, price)).sort((a, b) => a - b);
       const tail = (1 - level) / 2;
-      return { low: quantileOfSorted(values, tail), high: quantileOfSorted(values, 1 - tail) };
+      return { low: sortedQuantile(values, tail), high: sortedQuantile(values, 1 - tail) };
     },
   };
 }

@@ -7,6 +7,7 @@ declare module 'jstat' {
   }
   const jStat: {
     models: { ols(endog: number[], exog: number[][]): OlsResult };
+    percentile(values: number[], k: number, exclusive?: boolean): number;
   };
   export default jStat;
 }

@@ -58,6 +58,8 @@ export function percentileIntervals<K extends string>(
       result[key] = { ciLow: null, ciHigh: null };
       continue;
     }
+    // An order statistic, not an interpolation (sortedQuantile): a figure read off a price
+    // ladder, such as its best price, must stay a value the figure can take.
     const at = (q: number) =>
       sorted[Math.min(sorted.length - 1, Math.max(0, Math.floor(q * sorted.length)))];
     result[key] = { ciLow: at(tail), ciHigh: at(1 - tail) };

@@ -1,5 +1,5 @@
 import { mulberry32 } from '../random/mulberry32';
-import { sortedQuantile } from './weighted-quantiles';
+import { sortedQuantile } from '../resampling/sorted-quantile';
 
 export interface BootstrapOptions {
   /** Number of resamples; default 2000. */

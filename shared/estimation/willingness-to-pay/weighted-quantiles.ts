@@ -22,11 +22,3 @@ export function weightedMedian(values: readonly number[], weights: readonly numb
 export function weightedMean(values: readonly number[], weights: readonly number[]): number {
   return values.reduce((s, v, i) => s + weights[i] * v, 0) / weights.reduce((s, w) => s + w, 0);
 }
-
-/** Empirical quantile of sorted values by linear interpolation between order statistics (type 7). */
-export function sortedQuantile(sorted: readonly number[], p: number): number {
-  const h = (sorted.length - 1) * p;
-  const lo = Math.floor(h);
-  const hi = Math.min(lo + 1, sorted.length - 1);
-  return sorted[lo] + (h - lo) * (sorted[hi] - sorted[lo]);
-}

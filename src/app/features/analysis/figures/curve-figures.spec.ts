@@ -1,11 +1,7 @@
 import { linearDescription, zeroCovariance } from '../testing/linear-description';
 import { curveEnsemble } from '@shared/analysis/curve-ensemble';
 import { curveFigures, type FigureOutcome } from './curve-figures';
-import {
-  estimateOnEnsemble,
-  quantileOfSorted,
-  type EstimatedFigure,
-} from '@shared/analysis/estimated-figure';
+import { estimateOnEnsemble, type EstimatedFigure } from '@shared/analysis/estimated-figure';
 import { FigureFormat } from './figure-format';
 import { choleskyFactor, normalParameterDraws } from '@shared/analysis/parameter-draws';
 
@@ -81,11 +77,6 @@ describe('simulation intervals', () => {
       [1, 2],
     ]); // by hand
     expect(choleskyFactor(zeroCovariance)).toEqual(zeroCovariance);
-  });
-
-  it('reads percentiles by interpolation between order statistics', () => {
-    expect(quantileOfSorted([1, 2, 3, 4, 5], 0.5)).toBe(3);
-    expect(quantileOfSorted([0, 10], 0.25)).toBe(2.5);
   });
 
   it('withholds the interval when most simulated curves give no value', () => {
