@@ -26,11 +26,14 @@ export function answerSamples(): AnswerSample[] {
     {
       block: block('price-ladder', 'ladder'),
       valid: [
-        { steps: [{ priceMinor: 100, response: 'yes' }] },
+        // A "no" at the lowest price settles every higher one.
+        { steps: [{ priceMinor: 100, response: 'no' }] },
         {
           steps: [
             { priceMinor: 300, response: 'no' },
             { priceMinor: 150, response: 'yes' },
+            { priceMinor: 200, response: 'yes' },
+            { priceMinor: 250, response: 'no' },
           ],
         },
       ],
@@ -41,6 +44,7 @@ export function answerSamples(): AnswerSample[] {
         {
           steps: [
             { priceMinor: 100, response: 5 },
+            { priceMinor: 150, response: 3 },
             { priceMinor: 200, response: 1 },
           ],
         },

@@ -4,7 +4,12 @@ import { everyKindQuestionnaire } from './every-kind-questionnaire';
 const photo = '0b8f3a4e-6c1d-4e2f-9a7b-5c3d2e1f0a9b';
 const goodAnswers: Record<string, unknown> = {
   consent: { agreed: true },
-  'price-ladder': { steps: [{ priceMinor: 150, response: 'yes' }] },
+  'price-ladder': {
+    steps: [
+      { priceMinor: 150, response: 'yes' },
+      { priceMinor: 200, response: 'no' },
+    ],
+  },
   'price-thresholds': {
     tooCheapMinor: 50,
     cheapMinor: 100,

@@ -15,7 +15,7 @@ describe('the payment-card block', () => {
   it('names an amount that does not increase', () => {
     const result = paymentCardBlockSchema.safeParse({ ...card, amountsMinor: [100, 50, 200] });
     expect(result.error?.issues.map((i) => [i.path.join('.'), i.message])).toEqual([
-      ['amountsMinor.1', 'Amount 2 (50) must be higher than amount 1 (100)'],
+      ['amountsMinor.1', 'Each amount must be higher than the one before: amount 2 is not'],
     ]);
   });
 

@@ -1,9 +1,13 @@
+import { amountWordsFor } from '../../money/amount-words';
 import { starterBlock } from '../block-starters';
 import {
   type PriceThresholdsBlock,
   priceThresholdsAnswerSchema,
   priceThresholdsBlockSchema,
 } from './price-thresholds-block';
+
+// Intl puts a no-break space after the symbol; the expected texts use a plain one.
+const kesWords = (minor: number) => amountWordsFor('KES', 'en-KE')(minor).replace(/\s/g, ' ');
 
 const block = starterBlock('price-thresholds', 'thresholds') as PriceThresholdsBlock;
 const four = { tooCheapMinor: 50, cheapMinor: 100, expensiveMinor: 200, tooExpensiveMinor: 300 };
@@ -40,6 +44,24 @@ describe('the price-thresholds block', () => {
       tooExpensiveMinor: 100001,
     });
     expect(result.error?.issues[0]).toMatchObject({ path: ['tooExpensiveMinor'] });
+  });
+
+  it('names each part left out or over the cap, the cap in the study’s currency', () => {
+    const schema = priceThresholdsAnswerSchema(
+      { ...block, askLikelihood: true, maxPriceMinor: 2000000 },
+      kesWords,
+    );
+    const result = schema.safeParse({
+      tooCheapMinor: 50,
+      cheapMinor: 100,
+      tooExpensiveMinor: 2000001,
+    });
+    expect(result.error?.issues.map((i) => [i.path.join('.'), i.message])).toEqual([
+      ['expensiveMinor', 'Expensive price: type the amount'],
+      ['tooExpensiveMinor', 'Too expensive price: must be at most Ksh 20,000.00'],
+      ['likelihoodCheap', 'Choose how likely they would buy it at the bargain price'],
+      ['likelihoodExpensive', 'Choose how likely they would buy it at the expensive price'],
+    ]);
   });
 
   it('wants both likelihoods exactly when the block asks for them', () => {

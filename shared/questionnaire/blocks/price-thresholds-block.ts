@@ -1,5 +1,7 @@
 import { z } from 'zod';
-import { nonNegativeMinorSchema, positiveMinorSchema } from '../../money/minor-amount';
+import { amountAnswerSchema } from '../../money/amount-answer';
+import type { AmountWords } from '../../money/amount-words';
+import { positiveMinorSchema } from '../../money/minor-amount';
 import { isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
@@ -27,27 +29,56 @@ export const thresholdQuestions = [
 
 export type ThresholdField = (typeof thresholdQuestions)[number][0];
 
+/** Each threshold's short name, leading the messages about it. */
+export const thresholdFieldNames: Readonly<Record<ThresholdField, string>> = {
+  tooCheapMinor: 'Too cheap price',
+  cheapMinor: 'Bargain price',
+  expensiveMinor: 'Expensive price',
+  tooExpensiveMinor: 'Too expensive price',
+};
+
+/** The two purchase-likelihood follow-ups, with the words the enumerator reads. */
+export const likelihoodQuestions = [
+  ['likelihoodCheap', 'How likely would they buy it at the bargain price?'],
+  ['likelihoodExpensive', 'How likely would they buy it at the expensive price?'],
+] as const;
+
+export type LikelihoodField = (typeof likelihoodQuestions)[number][0];
+
+const likelihoodUnset: Readonly<Record<LikelihoodField, string>> = {
+  likelihoodCheap: 'Choose how likely they would buy it at the bargain price',
+  likelihoodExpensive: 'Choose how likely they would buy it at the expensive price',
+};
+
 /**
  * The four prices (out-of-order answers are kept: quality checks flag them), and the two
- * likelihoods exactly when the block asks for them.
+ * likelihoods exactly when the block asks for them. `words` writes the price limit in the
+ * study's currency.
  */
-export function priceThresholdsAnswerSchema(block: PriceThresholdsBlock) {
-  const price = nonNegativeMinorSchema.max(block.maxPriceMinor, {
-    error: `Must be at most ${block.maxPriceMinor} minor units`,
-  });
-  const likelihood = z
-    .int()
-    .min(1, 'Likelihood runs from 1 to 5')
-    .max(5, 'Likelihood runs from 1 to 5');
-  const shape = {
-    tooCheapMinor: price,
-    cheapMinor: price,
-    expensiveMinor: price,
-    tooExpensiveMinor: price,
+export function priceThresholdsAnswerSchema(block: PriceThresholdsBlock, words?: AmountWords) {
+  const price = (field: ThresholdField) =>
+    amountAnswerSchema({
+      name: thresholdFieldNames[field],
+      min: 0,
+      max: block.maxPriceMinor,
+      words,
+    });
+  const likelihood = (field: LikelihoodField) => {
+    const error = likelihoodUnset[field];
+    return z.int({ error }).min(1, error).max(5, error);
   };
-  return block.askLikelihood
-    ? z.strictObject({ ...shape, likelihoodCheap: likelihood, likelihoodExpensive: likelihood })
-    : z.strictObject(shape);
+  const shape = {
+    tooCheapMinor: price('tooCheapMinor'),
+    cheapMinor: price('cheapMinor'),
+    expensiveMinor: price('expensiveMinor'),
+    tooExpensiveMinor: price('tooExpensiveMinor'),
+  };
+  if (!block.askLikelihood) return z.strictObject(shape);
+  return z.strictObject({
+    ...shape,
+    likelihoodCheap: likelihood('likelihoodCheap'),
+    likelihoodExpensive: likelihood('likelihoodExpensive'),
+  });
 }
 export interface PriceThresholdsAnswer {
   tooCheapMinor: number;
@@ -58,7 +89,7 @@ export interface PriceThresholdsAnswer {
   likelihoodExpensive?: number;
 }
 
-const likelihoodFields = ['likelihoodCheap', 'likelihoodExpensive'];
+const likelihoodFields = likelihoodQuestions.map(([field]) => field as string);
 
 /** The quick test of a price-thresholds answer (see `answerFitsFor`). */
 export function priceThresholdsAnswerFits(block: PriceThresholdsBlock) {

@@ -19,7 +19,9 @@ describe('the purchase-recall block', () => {
     const schema = purchaseRecallAnswerSchema(recall);
     expect(schema.safeParse({ units: 3, pricePaidMinor: 120 }).success).toBe(true);
     expect(schema.safeParse({ units: 0 }).success).toBe(true);
-    expect(schema.safeParse({ units: 3 }).error?.issues[0].message).toBe('Record the price paid');
+    expect(schema.safeParse({ units: 3 }).error?.issues[0].message).toBe(
+      'Price paid per unit, the last time: type the amount',
+    );
     expect(schema.safeParse({ units: 0, pricePaidMinor: 120 }).error?.issues[0].message).toBe(
       'No price is asked here',
     );
@@ -27,6 +29,8 @@ describe('the purchase-recall block', () => {
 
   it('refuses more units than the block allows', () => {
     const schema = purchaseRecallAnswerSchema({ ...recall, maxUnits: 10, askPricePaid: false });
-    expect(schema.safeParse({ units: 11 }).error?.issues[0].message).toBe('At most 10 units');
+    expect(schema.safeParse({ units: 11 }).error?.issues[0].message).toBe(
+      `Units bought in the last ${recall.periodDays} days: at most 10`,
+    );
   });
 });

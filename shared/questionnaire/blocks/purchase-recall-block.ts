@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { positiveMinorSchema } from '../../money/minor-amount';
+import { amountAnswerSchema } from '../../money/amount-answer';
+import type { AmountWords } from '../../money/amount-words';
 import { isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
@@ -16,15 +17,32 @@ export const purchaseRecallBlockSchema = z.strictObject({
 });
 export type PurchaseRecallBlock = z.infer<typeof purchaseRecallBlockSchema>;
 
-/** Units bought (0 … maxUnits); the price paid is asked only when something was bought. */
-export function purchaseRecallAnswerSchema(block: PurchaseRecallBlock) {
+/** The labels of the answer's parts, as the enumerator sees them. */
+export function purchaseRecallFieldNames(block: PurchaseRecallBlock) {
+  return {
+    units: `Units bought in the last ${block.periodDays} days`,
+    pricePaidMinor: 'Price paid per unit, the last time',
+  } as const;
+}
+
+/**
+ * Units bought (0 … maxUnits); the price paid is asked only when something was bought.
+ * `words` writes amounts in the study's currency.
+ */
+export function purchaseRecallAnswerSchema(block: PurchaseRecallBlock, words?: AmountWords) {
+  const names = purchaseRecallFieldNames(block);
   return z
     .strictObject({
       units: z
-        .int('Count whole units')
-        .nonnegative('A count cannot be negative')
-        .max(block.maxUnits, `At most ${block.maxUnits} units`),
-      pricePaidMinor: positiveMinorSchema.optional(),
+        .int(`${names.units}: count whole units`)
+        .nonnegative(`${names.units}: a count cannot be negative`)
+        .max(block.maxUnits, `${names.units}: at most ${block.maxUnits}`),
+      pricePaidMinor: amountAnswerSchema({
+        name: names.pricePaidMinor,
+        min: 1,
+        max: Number.MAX_SAFE_INTEGER,
+        words,
+      }).optional(),
     })
     .superRefine((answer, ctx) => {
       const wanted = block.askPricePaid && answer.units > 0;
@@ -32,7 +50,7 @@ export function purchaseRecallAnswerSchema(block: PurchaseRecallBlock) {
         ctx.addIssue({
           code: 'custom',
           path: ['pricePaidMinor'],
-          message: 'Record the price paid',
+          message: `${names.pricePaidMinor}: type the amount`,
         });
       }
       if (!wanted && answer.pricePaidMinor !== undefined) {

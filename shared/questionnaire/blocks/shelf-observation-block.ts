@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { amountAnswerSchema } from '../../money/amount-answer';
+import type { AmountWords } from '../../money/amount-words';
 import { positiveMinorSchema } from '../../money/minor-amount';
 import { isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
@@ -10,7 +12,8 @@ export const photoRules = ['required', 'optional', 'none'] as const;
 /**
  * Shelf observation: what a shop actually charges and sells. The enumerator records the shelf
  * price, the pack size, and either units sold over the last `periodDays` or the stock on hand,
- * with a photo of the price tag when `photo` asks for one.
+ * with a photo of the price tag when `photo` asks for one. `maxPriceMinor` bounds the price the
+ * device accepts, to catch a slipped digit (`defaultShelfPriceCapMinor` when not set).
  */
 export const shelfObservationBlockSchema = z
   .strictObject({
@@ -20,6 +23,7 @@ export const shelfObservationBlockSchema = z
     measure: z.enum(shelfMeasures, { error: 'Choose units sold or stock on hand' }),
     periodDays: z.int().min(1, 'At least one day').max(366, 'At most 366 days').optional(),
     photo: z.enum(photoRules, { error: 'Say whether a price-tag photo is needed' }),
+    maxPriceMinor: positiveMinorSchema.optional(),
   })
   .superRefine((block, ctx) => {
     if (block.measure === 'units-sold' && block.periodDays === undefined) {
@@ -39,14 +43,60 @@ export const shelfObservationBlockSchema = z
   });
 export type ShelfObservationBlock = z.infer<typeof shelfObservationBlockSchema>;
 
-const tagPhotoIdSchema = z.uuid('A photo is recorded by its id');
+/**
+ * The highest shelf price accepted when the block sets none: 100 million minor units (a million
+ * in a two-decimal currency), far above a shelf price anywhere, yet it stops a run of extra
+ * zeros. A rule of thumb, not a sourced figure.
+ */
+export const defaultShelfPriceCapMinor = 100_000_000;
 
-/** Price, pack size, the count the block asks for, and the tag photo when the block wants it. */
-export function shelfObservationAnswerSchema(block: ShelfObservationBlock) {
+/** The labels of the answer's parts, as the enumerator sees them. */
+export function shelfObservationFieldNames(block: ShelfObservationBlock) {
+  return {
+    priceMinor: 'Shelf price',
+    packSize: `Pack size (${packUnitWords[block.packUnit]})`,
+    quantity:
+      block.measure === 'units-sold'
+        ? `Units sold in the last ${block.periodDays ?? 0} days`
+        : 'Units in stock now',
+  } as const;
+}
+
+export const packUnitWords: Readonly<Record<ShelfObservationBlock['packUnit'], string>> = {
+  g: 'grams',
+  kg: 'kilograms',
+  ml: 'millilitres',
+  l: 'litres',
+  piece: 'pieces',
+};
+
+const tagPhotoIdSchema = z.uuid('Take the photo of the price tag');
+
+/**
+ * Price, pack size, the count the block asks for, and the tag photo when the block wants it.
+ * `words` writes the price limit in the study's currency.
+ */
+export function shelfObservationAnswerSchema(block: ShelfObservationBlock, words?: AmountWords) {
+  const names = shelfObservationFieldNames(block);
   const shape = {
-    priceMinor: positiveMinorSchema,
-    packSize: z.number().finite().positive('The pack size must be more than zero'),
-    quantity: z.int('Count whole units').nonnegative('A count cannot be negative'),
+    priceMinor: amountAnswerSchema({
+      name: names.priceMinor,
+      min: 1,
+      max: block.maxPriceMinor ?? defaultShelfPriceCapMinor,
+      words,
+    }),
+    packSize: z
+      .number({ error: `${names.packSize}: type the pack size` })
+      .finite(`${names.packSize}: type the pack size`)
+      .positive(`${names.packSize}: must be more than zero`),
+    quantity: z
+      .int({
+        error: (issue) =>
+          issue.input === undefined
+            ? `${names.quantity}: type the count`
+            : `${names.quantity}: count whole units`,
+      })
+      .nonnegative(`${names.quantity}: a count cannot be negative`),
   };
   const photoId = tagPhotoIdSchema;
   if (block.photo === 'required') return z.strictObject({ ...shape, photoId });
@@ -70,7 +120,7 @@ export function shelfObservationAnswerFits(block: ShelfObservationBlock) {
     if (!isRecordWith(answer, keys)) return false;
     const packSize = answer['packSize'];
     if (
-      !isWholeBetween(answer['priceMinor'], 1, Number.MAX_SAFE_INTEGER) ||
+      !isWholeBetween(answer['priceMinor'], 1, block.maxPriceMinor ?? defaultShelfPriceCapMinor) ||
       !Number.isFinite(packSize) ||
       (packSize as number) <= 0 ||
       !isWholeBetween(answer['quantity'], 0, Number.MAX_SAFE_INTEGER)

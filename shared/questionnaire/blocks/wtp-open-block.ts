@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { amountAnswerSchema } from '../../money/amount-answer';
+import type { AmountWords } from '../../money/amount-words';
 import { nonNegativeMinorSchema, positiveMinorSchema } from '../../money/minor-amount';
 import { isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
@@ -25,12 +27,19 @@ export const wtpOpenBlockSchema = z
   });
 export type WtpOpenBlock = z.infer<typeof wtpOpenBlockSchema>;
 
-/** The amount, within the block's range. */
-export function wtpOpenAnswerSchema(block: WtpOpenBlock) {
+/** The label of the amount, leading the messages about it. */
+export const wtpOpenAmountName = 'Most they would pay';
+
+/** The amount, within the block's range; `words` writes the range in the study's currency. */
+export function wtpOpenAnswerSchema(block: WtpOpenBlock, words?: AmountWords) {
+  const { minMinor, maxMinor } = block;
   return z.strictObject({
-    amountMinor: nonNegativeMinorSchema
-      .min(block.minMinor, { error: `Must be at least ${block.minMinor} minor units` })
-      .max(block.maxMinor, { error: `Must be at most ${block.maxMinor} minor units` }),
+    amountMinor: amountAnswerSchema({
+      name: wtpOpenAmountName,
+      min: Math.max(0, minMinor),
+      max: maxMinor,
+      words,
+    }),
   });
 }
 export type WtpOpenAnswer = z.infer<ReturnType<typeof wtpOpenAnswerSchema>>;

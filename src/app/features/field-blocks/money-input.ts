@@ -1,13 +1,24 @@
-import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  DestroyRef,
+  computed,
+  inject,
+  input,
+  output,
+  signal,
+} from '@angular/core';
 import { minorToDecimalString } from '@shared/money/format-money';
 import { minorUnitDigits } from '@shared/money/minor-unit-digits';
 import { parseMoney } from '@shared/money/parse-money';
+import { TypingProblems } from './typing-problems';
 
 let nextId = 0;
 
 /**
  * An amount typed as the respondent says it ("1,250.50") and read in the study's locale into
- * integer minor units; a typing mistake is explained under the field rather than guessed at.
+ * integer minor units; a typing mistake is explained under the field rather than guessed at,
+ * and noted (when the screen keeps a `TypingProblems`) for the answer `part` it was meant for.
  */
 @Component({
   selector: 'app-money-input',
@@ -34,6 +45,9 @@ let nextId = 0;
 })
 export class MoneyInput {
   readonly label = input.required<string>();
+  /** The part of the answer this amount fills (`amountMinor`), and its name in messages. */
+  readonly part = input<string>('');
+  readonly name = input<string>('');
   readonly valueMinor = input<number | null | undefined>();
   readonly currency = input.required<string>();
   readonly locale = input.required<string>();
@@ -42,6 +56,11 @@ export class MoneyInput {
   protected readonly errorId = `money-error-${nextId++}`;
   protected readonly problem = signal<string | null>(null);
   private readonly typed = signal<string | null>(null);
+  private readonly typingProblems = inject(TypingProblems, { optional: true });
+
+  constructor() {
+    inject(DestroyRef).onDestroy(() => this.typingProblems?.note(this.part(), null));
+  }
 
   /** What the person typed, or the stored amount written plainly when they have typed nothing. */
   protected readonly shown = computed(() => {
@@ -56,13 +75,10 @@ export class MoneyInput {
 
   protected read(text: string): void {
     this.typed.set(text);
-    if (text.trim() === '') {
-      this.problem.set(null);
-      this.valueMinorChange.emit(undefined);
-      return;
-    }
-    const parsed = parseMoney(text, this.currency(), this.locale());
-    this.problem.set(parsed.ok ? null : parsed.message);
-    this.valueMinorChange.emit(parsed.ok ? parsed.minor : undefined);
+    const parsed = text.trim() === '' ? null : parseMoney(text, this.currency(), this.locale());
+    const problem = parsed && !parsed.ok ? parsed.message : null;
+    this.problem.set(problem);
+    this.typingProblems?.note(this.part(), problem && `${this.name() || this.label()}: ${problem}`);
+    this.valueMinorChange.emit(parsed?.ok ? parsed.minor : undefined);
   }
 }

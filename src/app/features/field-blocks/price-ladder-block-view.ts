@@ -1,9 +1,10 @@
 import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
 import { formatMoney } from '@shared/money/format-money';
 import { stableSiteHash } from '@shared/questionnaire/bid-assignment';
-import type {
-  PriceLadderAnswer,
-  PriceLadderBlock,
+import {
+  openLadderPrices,
+  type PriceLadderAnswer,
+  type PriceLadderBlock,
 } from '@shared/questionnaire/blocks/price-ladder-block';
 import { previewContext, type BlockViewContext } from './block-view-context';
 import { YesNoChoice } from './yes-no-choice';
@@ -22,7 +23,10 @@ export function ladderOrder(block: PriceLadderBlock, seed: string): number[] {
   return [...prices.slice(start), ...prices.slice(0, start)];
 }
 
-/** Purchase intent at each price of the ladder, asked in the block's order. */
+/**
+ * Purchase intent at each price of the ladder, asked in the block's order. A price that an
+ * answer elsewhere settles (see `openLadderPrices`) says it needs no asking.
+ */
 @Component({
   selector: 'app-price-ladder-block-view',
   imports: [YesNoChoice],
@@ -31,6 +35,9 @@ export function ladderOrder(block: PriceLadderBlock, seed: string): number[] {
       @for (price of order(); track price; let i = $index) {
         <li class="ladder__step">
           <span class="ladder__price" [id]="labelId(i)">At {{ money(price) }}?</span>
+          @if (settled().has(price)) {
+            <span class="bv-hint">No need to ask: the answer at another price settles it.</span>
+          }
           @if (block().scale === 'yes-no') {
             <app-yes-no-choice
               [labelledBy]="labelId(i)"
@@ -86,6 +93,13 @@ export class PriceLadderBlockView {
 
   protected readonly intentLabels = intentLabels;
   protected readonly order = computed(() => ladderOrder(this.block(), this.context().seed));
+  /** Prices not answered that the answers given settle. */
+  protected readonly settled = computed(() => {
+    const steps = this.answer()?.steps ?? [];
+    const open = new Set(openLadderPrices(this.block(), steps));
+    const answered = new Set(steps.map((step) => step.priceMinor));
+    return new Set(this.block().pricesMinor.filter((p) => !answered.has(p) && !open.has(p)));
+  });
 
   protected labelId(index: number): string {
     return `${this.block().id}-price-${index}`;

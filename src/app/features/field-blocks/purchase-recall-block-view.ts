@@ -1,7 +1,8 @@
-import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
-import type {
-  PurchaseRecallAnswer,
-  PurchaseRecallBlock,
+import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
+import {
+  purchaseRecallFieldNames,
+  type PurchaseRecallAnswer,
+  type PurchaseRecallBlock,
 } from '@shared/questionnaire/blocks/purchase-recall-block';
 import { previewContext, type BlockViewContext } from './block-view-context';
 import { MoneyInput } from './money-input';
@@ -12,7 +13,7 @@ import { MoneyInput } from './money-input';
   imports: [MoneyInput],
   template: `
     <label class="bv-field">
-      <span>Units bought in the last {{ block().periodDays }} days</span>
+      <span>{{ names().units }}</span>
       <input
         class="bv-input"
         type="number"
@@ -26,7 +27,8 @@ import { MoneyInput } from './money-input';
     </label>
     @if (block().askPricePaid && (answer()?.units ?? 0) > 0) {
       <app-money-input
-        label="Price paid per unit, the last time"
+        part="pricePaidMinor"
+        [label]="names().pricePaidMinor"
         [currency]="context().currency"
         [locale]="context().locale"
         [valueMinor]="answer()?.pricePaidMinor"
@@ -43,6 +45,8 @@ export class PurchaseRecallBlockView {
   readonly context = input<BlockViewContext>(previewContext);
   readonly labelledBy = input<string>('');
   readonly answerChange = output<PurchaseRecallAnswer | undefined>();
+
+  protected readonly names = computed(() => purchaseRecallFieldNames(this.block()));
 
   protected setUnits(text: string): void {
     const units = Number(text);

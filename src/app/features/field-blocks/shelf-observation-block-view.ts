@@ -1,19 +1,12 @@
 import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
-import type {
-  ShelfObservationAnswer,
-  ShelfObservationBlock,
+import {
+  shelfObservationFieldNames,
+  type ShelfObservationAnswer,
+  type ShelfObservationBlock,
 } from '@shared/questionnaire/blocks/shelf-observation-block';
 import { previewContext, type BlockViewContext } from './block-view-context';
 import { MoneyInput } from './money-input';
 import { PhotoPicker } from './photo-picker';
-
-const unitWords: Record<ShelfObservationBlock['packUnit'], string> = {
-  g: 'grams',
-  kg: 'kilograms',
-  ml: 'millilitres',
-  l: 'litres',
-  piece: 'pieces',
-};
 
 /** The shelf price, pack size, the count the block asks for, and the price-tag photo. */
 @Component({
@@ -21,14 +14,15 @@ const unitWords: Record<ShelfObservationBlock['packUnit'], string> = {
   imports: [MoneyInput, PhotoPicker],
   template: `
     <app-money-input
-      label="Shelf price"
+      part="priceMinor"
+      [label]="names().priceMinor"
       [currency]="context().currency"
       [locale]="context().locale"
       [valueMinor]="answer()?.priceMinor"
       (valueMinorChange)="set('priceMinor', $event)"
     />
     <label class="bv-field">
-      <span>Pack size ({{ unitWord() }})</span>
+      <span>{{ names().packSize }}</span>
       <input
         class="bv-input"
         type="number"
@@ -39,7 +33,7 @@ const unitWords: Record<ShelfObservationBlock['packUnit'], string> = {
       />
     </label>
     <label class="bv-field">
-      <span>{{ quantityLabel() }}</span>
+      <span>{{ names().quantity }}</span>
       <input
         class="bv-input"
         type="number"
@@ -71,13 +65,7 @@ export class ShelfObservationBlockView {
   readonly labelledBy = input<string>('');
   readonly answerChange = output<ShelfObservationAnswer | undefined>();
 
-  protected readonly unitWord = computed(() => unitWords[this.block().packUnit]);
-  protected readonly quantityLabel = computed(() => {
-    const block = this.block();
-    return block.measure === 'units-sold'
-      ? `Units sold in the last ${block.periodDays ?? 0} days`
-      : 'Units in stock now';
-  });
+  protected readonly names = computed(() => shelfObservationFieldNames(this.block()));
 
   protected read(text: string): number | undefined {
     const value = Number(text);

@@ -1,5 +1,9 @@
 import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
-import type { WtpOpenAnswer, WtpOpenBlock } from '@shared/questionnaire/blocks/wtp-open-block';
+import {
+  wtpOpenAmountName,
+  type WtpOpenAnswer,
+  type WtpOpenBlock,
+} from '@shared/questionnaire/blocks/wtp-open-block';
 import { previewContext, type BlockViewContext } from './block-view-context';
 import { MoneyInput } from './money-input';
 
@@ -9,7 +13,8 @@ import { MoneyInput } from './money-input';
   imports: [MoneyInput],
   template: `
     <app-money-input
-      label="Most they would pay"
+      part="amountMinor"
+      [label]="label"
       [currency]="context().currency"
       [locale]="context().locale"
       [valueMinor]="answer()?.amountMinor"
@@ -26,4 +31,6 @@ export class WtpOpenBlockView {
   readonly context = input<BlockViewContext>(previewContext);
   readonly labelledBy = input<string>('');
   readonly answerChange = output<WtpOpenAnswer | undefined>();
+
+  protected readonly label = wtpOpenAmountName;
 }

@@ -14,9 +14,12 @@ import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router } from '@angular/router';
+import type { FieldIssue } from '@shared/http/api-error';
 import { BLOCK_PHOTO_STORE, type BlockViewContext } from '../../field-blocks/block-view-context';
 import { BlockView } from '../../field-blocks/block-view';
+import { TypingProblems } from '../../field-blocks/typing-problems';
 import { OutboxSync } from '../sync/outbox-sync';
+import { correctionIssueText } from './correction-issue';
 import { progressPercent, withoutHiddenAnswers } from './interview-flow';
 import { InterviewPhotoStore } from './interview-photo-store';
 import { InterviewSession } from './interview-session';
@@ -31,6 +34,7 @@ import { RespondentReference } from './respondent-reference';
   providers: [
     InterviewSession,
     InterviewPhotoStore,
+    TypingProblems,
     { provide: BLOCK_PHOTO_STORE, useExisting: InterviewPhotoStore },
   ],
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -71,6 +75,10 @@ export class InterviewRunnerPage {
       this.photos.interviewId = id;
       void this.session.load(id);
     });
+  }
+
+  protected correctionText(issue: FieldIssue): string {
+    return correctionIssueText(issue, this.session.blocks());
   }
 
   protected async goForward(): Promise<void> {

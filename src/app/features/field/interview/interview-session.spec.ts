@@ -6,6 +6,7 @@ import { Session } from '../../../core/session';
 import { AssignmentsCache } from '../assignments/assignments-cache';
 import { GpsReader } from '../capture/gps-reader';
 import { FieldStore } from '../data/field-store';
+import { TypingProblems } from '../../field-blocks/typing-problems';
 import { fieldVersion, pointId, routeId, studyId, versionId } from '../testing/field-fixtures';
 import { InterviewDrafts } from './interview-drafts';
 import { InterviewSession } from './interview-session';
@@ -35,6 +36,7 @@ describe('InterviewSession and the respondent reference', () => {
     TestBed.configureTestingModule({
       providers: [
         InterviewSession,
+        TypingProblems,
         { provide: Session, useValue: { info: () => ({ user: { id: userId } }) } },
         { provide: GpsReader, useValue: { readOnce: () => Promise.resolve({ ok: false }) } },
         {

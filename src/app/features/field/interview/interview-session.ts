@@ -5,14 +5,18 @@ import {
   respondentKeyFor,
   respondentReferenceProblem,
 } from '@shared/field-sync/respondent-key';
+import { amountWordsFor } from '@shared/money/amount-words';
 import type { BidLevel } from '@shared/questionnaire/bid-design';
+import type { Block } from '@shared/questionnaire/block';
 import { validateInterviewAnswers } from '@shared/questionnaire/interview-answers';
 import type { RouteStop } from '@shared/routes/field-route';
 import { AssignmentsCache } from '../assignments/assignments-cache';
 import { routeOf, stopOf, studyOf, versionOf } from '../assignments/assignment-lookup';
 import type { DraftInterview, OutboxEntry } from '../data/field-records';
 import { FieldStore } from '../data/field-store';
-import { answerIssues, type AnswerIssue } from './answer-check';
+import { TypingProblems } from '../../field-blocks/typing-problems';
+import { answerIssues, screenIssues, type AnswerIssue } from './answer-check';
+import { answerSchemaInCurrency } from './answer-schema-in-currency';
 import { InterviewDrafts } from './interview-drafts';
 import { isRefusal, nextStep, previousStep, withoutHiddenAnswers } from './interview-flow';
 
@@ -34,6 +38,7 @@ export class InterviewSession {
   private readonly drafts = inject(InterviewDrafts);
   private readonly assignments = inject(AssignmentsCache);
   private readonly store = inject(FieldStore);
+  private readonly typing = inject(TypingProblems);
 
   readonly draft = signal<DraftInterview | null>(null);
   readonly setting = signal<InterviewSetting | null>(null);
@@ -53,6 +58,11 @@ export class InterviewSession {
   readonly block = computed(() => this.blocks()[this.step()] ?? null);
   readonly atEnd = computed(() => this.setting() !== null && this.block() === null);
   readonly hasRespondentKey = computed(() => Boolean(this.draft()?.respondentKey));
+  /** Amounts in messages, written as the runner writes them elsewhere. */
+  private readonly amountWords = computed(() => {
+    const study = this.setting()?.study;
+    return amountWordsFor(study?.currency ?? 'USD', study?.locale ?? 'en');
+  });
 
   async load(id: string): Promise<void> {
     const draft = await this.drafts.get(id);
@@ -79,12 +89,15 @@ export class InterviewSession {
     await this.enterStep(draft.step);
   }
 
-  /** The answer given on screen, saved as it is typed so a closed tab loses nothing. */
+  /**
+   * The answer given on screen, saved as it is typed so a closed tab loses nothing. Problems
+   * already shown are checked again, so each goes as soon as it is put right.
+   */
   async change(answer: unknown): Promise<void> {
     const draft = this.draft();
     const block = this.block();
     this.pending.set(answer);
-    this.issues.set([]);
+    this.issues.set(block && this.issues().length > 0 ? this.issuesOf(block, answer) : []);
     if (draft && block) await this.drafts.saveAnswer(draft.id, block.id, answer, draft.step);
   }
 
@@ -118,7 +131,7 @@ export class InterviewSession {
     const block = this.block();
     if (!draft || !block) return 'invalid';
     const answer = this.pending();
-    const issues = answerIssues(block, answer);
+    const issues = this.issuesOf(block, answer);
     if (issues.length === 0 && isRefusal(block, answer)) {
       await this.drafts.refuse(draft.id);
       return 'refused';
@@ -134,6 +147,11 @@ export class InterviewSession {
     const asked = withoutHiddenAnswers(this.blocks(), answers);
     await this.moveTo(nextStep(this.blocks(), asked, draft.step), block.id, answer);
     return 'moved';
+  }
+
+  private issuesOf(block: Block, answer: unknown): AnswerIssue[] {
+    const issues = answerIssues(block, answer, this.amountWords());
+    return screenIssues(issues, this.typing.byPart());
   }
 
   async back(): Promise<void> {
@@ -152,11 +170,15 @@ export class InterviewSession {
     if (!setting) return [];
     const blocks = this.blocks();
     const answers = withoutHiddenAnswers(blocks, this.answers());
-    return validateInterviewAnswers(setting.version.definition, answers).map((problem) => ({
-      blockIndex: problem.blockIndex,
-      message: problem.message,
-      prompt: problem.blockIndex === null ? '' : blocks[problem.blockIndex].prompt,
-    }));
+    const words = this.amountWords();
+    const schemaFor = (block: Block) => answerSchemaInCurrency(block, words);
+    return validateInterviewAnswers(setting.version.definition, answers, schemaFor).map(
+      (problem) => ({
+        blockIndex: problem.blockIndex,
+        message: problem.message,
+        prompt: problem.blockIndex === null ? '' : blocks[problem.blockIndex].prompt,
+      }),
+    );
   }
 
   async finish(): Promise<OutboxEntry> {
