@@ -23,19 +23,24 @@ export interface BlockIssueSink {
   addIssue(issue: { code: 'custom'; message: string; path: (string | number)[] }): void;
 }
 
-/** Adds an issue for each position where `values` does not strictly increase. */
+/**
+ * Adds an issue for each position where `values` does not strictly increase. The message names
+ * positions, not amounts: the values are minor units, and the schema does not know the
+ * currency the researcher typed them in.
+ */
 export function requireIncreasing(
   values: readonly number[],
   field: string,
   noun: string,
   ctx: BlockIssueSink,
 ): void {
+  const word = noun.toLowerCase();
   for (let i = 1; i < values.length; i++) {
     if (values[i] <= values[i - 1]) {
       ctx.addIssue({
         code: 'custom',
         path: [field, i],
-        message: `${noun} ${i + 1} (${values[i]}) must be higher than ${noun.toLowerCase()} ${i} (${values[i - 1]})`,
+        message: `Each ${word} must be higher than the one before: ${word} ${i + 1} is not`,
       });
     }
   }

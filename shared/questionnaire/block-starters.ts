@@ -6,7 +6,7 @@ type Starter = { [K in BlockKind]: Omit<Extract<Block, { kind: K }>, 'id' | 'kin
 /**
  * The settings a newly added block starts with: each passes validation as it stands, so the
  * editor never shows a fresh block as broken, and only the words need the researcher's care.
- * Money amounts are minor units; the editor rescales them for the study's currency.
+ * Money amounts are minor units; without a price range they are only placeholders.
  */
 const starters: Starter = {
   consent: {
@@ -110,9 +110,76 @@ const starters: Starter = {
   text: { prompt: 'Anything else to add?', required: false, maxLength: 500, multiline: true },
 };
 
-/** A fresh block of `kind` with the given id. */
-export function starterBlock(kind: BlockKind, id: string): Block {
-  return structuredClone({ id, kind, ...starters[kind] }) as Block;
+/** The study's price range (minor units, lowest below highest) that money starters follow. */
+export interface StarterPriceRange {
+  readonly priceMinMinor: number;
+  readonly priceMaxMinor: number;
+}
+
+/**
+ * A fresh block of `kind` with the given id. With the study's price range, the amounts of the
+ * money blocks are laid out from it, so a researcher who keeps them still asks about the
+ * prices the study is about, and open answers are not capped below the study's top price.
+ */
+export function starterBlock(kind: BlockKind, id: string, prices?: StarterPriceRange): Block {
+  const fitted = prices && isRange(prices) ? rangeStarters(prices)[kind] : undefined;
+  return structuredClone({ id, kind, ...starters[kind], ...fitted }) as Block;
+}
+
+type MoneyKind = 'price-ladder' | 'payment-card' | 'dichotomous-choice' | 'wtp-open';
+type RangeStarter = { [K in MoneyKind | 'price-thresholds']: Partial<Starter[K]> };
+
+function rangeStarters({ priceMinMinor: low, priceMaxMinor: high }: StarterPriceRange) {
+  // Open answers reach well past the top price: a cap at it would censor the very answers
+  // that say the product is worth more than the study assumed.
+  const ceiling = tidy(high * 3, 'up');
+  const fitted: RangeStarter = {
+    'price-ladder': { pricesMinor: tidySpread(low, high, 6) },
+    'payment-card': {
+      amountsMinor: tidySpread(tidy(low / 2, 'down'), tidy(high * 1.5, 'up'), 8),
+    },
+    'dichotomous-choice': {
+      bidDesign: { levels: tidySpread(low, high, 5).map((bidMinor) => ({ bidMinor })) },
+    },
+    'wtp-open': { minMinor: 0, maxMinor: ceiling },
+    'price-thresholds': { maxPriceMinor: ceiling },
+  };
+  return fitted as Partial<Record<BlockKind, object>>;
+}
+
+function isRange({ priceMinMinor: low, priceMaxMinor: high }: StarterPriceRange): boolean {
+  return Number.isSafeInteger(low) && Number.isSafeInteger(high) && low >= 1 && high > low;
+}
+
+/** `amount` to two significant digits, rounded the given way, within what can be stored. */
+function tidy(amount: number, way: 'up' | 'down'): number {
+  const unit = 10 ** Math.max(0, Math.floor(Math.log10(Math.max(amount, 1))) - 1);
+  const rounded = (way === 'up' ? Math.ceil(amount / unit) : Math.floor(amount / unit)) * unit;
+  return Math.min(Math.max(1, rounded), Number.MAX_SAFE_INTEGER);
+}
+
+/**
+ * `low`, `high`, and between them the multiples of the finest tidy step (1, 2, 2.5, 5 × 10ⁿ)
+ * that keeps the list to `most` amounts; a multiple crowding either end is left out.
+ */
+function tidySpread(low: number, high: number, most: number): number[] {
+  for (const step of tidySteps(Math.floor((high - low) / (2 * most)))) {
+    const amounts = [low];
+    for (let at = (Math.floor(low / step) + 1) * step; at < high; at += step) {
+      if (at - low >= step / 3 && high - at >= step / 3) amounts.push(at);
+    }
+    amounts.push(high);
+    if (amounts.length <= most) return amounts;
+  }
+  return [low, high];
+}
+
+function* tidySteps(from: number): Generator<number> {
+  for (let scale = 1; scale <= Number.MAX_SAFE_INTEGER; scale *= 10) {
+    for (const step of [scale, 2 * scale, 2.5 * scale, 5 * scale]) {
+      if (Number.isInteger(step) && step >= from) yield step;
+    }
+  }
 }
 
 /** The first id of the form `price-ladder-2` that no block uses yet. */

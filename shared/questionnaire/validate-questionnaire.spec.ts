@@ -68,9 +68,19 @@ describe('validateQuestionnaire', () => {
     const bids = { ...starterBlock('dichotomous-choice', 'bid'), bidDesign: { levels: [] } };
     const card = { ...starterBlock('payment-card', 'card'), amountsMinor: [100, 100] };
     expect(brief(validateQuestionnaire({ blocks: [consent, ladder, bids, card] }))).toEqual([
-      [1, 'ladder', 'pricesMinor.1', 'Price 2 (200) must be higher than price 1 (300)'],
+      [
+        1,
+        'ladder',
+        'pricesMinor.1',
+        'Each price must be higher than the one before: price 2 is not',
+      ],
       [2, 'bid', 'bidDesign.levels', 'A bid design needs at least one bid'],
-      [3, 'card', 'amountsMinor.1', 'Amount 2 (100) must be higher than amount 1 (100)'],
+      [
+        3,
+        'card',
+        'amountsMinor.1',
+        'Each amount must be higher than the one before: amount 2 is not',
+      ],
     ]);
   });
 

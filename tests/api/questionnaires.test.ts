@@ -91,7 +91,7 @@ describe('creating and saving a questionnaire', () => {
       'a ladder whose prices do not increase',
       withBlock(1, { pricesMinor: [200, 150] }),
       'definition.blocks.1.pricesMinor.1',
-      'Price 2 (150) must be higher than price 1 (200)',
+      'Each price must be higher than the one before: price 2 is not',
     ],
     [
       'a bid design with no bids',
@@ -103,7 +103,7 @@ describe('creating and saving a questionnaire', () => {
       'a payment card whose amounts fall',
       withBlock(4, { amountsMinor: [300, 100] }),
       'definition.blocks.4.amountsMinor.1',
-      'Amount 2 (100) must be higher than amount 1 (300)',
+      'Each amount must be higher than the one before: amount 2 is not',
     ],
     [
       'consent that is not first',

@@ -118,10 +118,13 @@ describe('the questionnaire editor', () => {
     const ladder = await openBlock(1);
     await ladder.getByLabel('Price 2', { exact: true }).fill('0.50');
     const problems = page.getByRole('region', { name: /problems? to fix/ });
-    await problems.getByText('Price 2 (50) must be higher than price 1 (100)').waitFor();
+    await problems
+      .getByText('Each price must be higher than the one before: price 2 is not')
+      .waitFor();
     expect(await page.getByRole('button', { name: 'Publish' }).isDisabled()).toBe(true);
     await screenshot(page, 'editor-problem-360');
-    await ladder.getByLabel('Price 2', { exact: true }).fill('1.50');
+    // The ladder starts from the study's range (Ksh 500 to 4,000.50), so price 1 is 500.
+    await ladder.getByLabel('Price 2', { exact: true }).fill('1000');
     await problems.waitFor({ state: 'detached' });
 
     // Double bounds bring follow-up bids to every bid.

@@ -1,6 +1,7 @@
 import { MAT_FORM_FIELD_DEFAULT_OPTIONS } from '@angular/material/form-field';
 import { Routes } from '@angular/router';
 import { roleGuard } from '../../core/auth-guard';
+import { unsavedChangesGuard } from './questionnaire-editor/unsaved-changes-guard';
 
 export const studiesRoutes: Routes = [
   {
@@ -35,6 +36,7 @@ export const studiesRoutes: Routes = [
       {
         path: ':studyId/questionnaires/:questionnaireId',
         title: 'Questionnaire · Fieldcurve',
+        canDeactivate: [unsavedChangesGuard],
         loadComponent: () =>
           import('./questionnaire-editor/questionnaire-editor-page').then(
             (m) => m.QuestionnaireEditorPage,

@@ -30,6 +30,18 @@ describe('EditorState', () => {
     expect(state.dirty()).toBe(true);
   });
 
+  it('starts money blocks from the study’s price range', () => {
+    state.add('price-ladder', { priceMinMinor: 50000, priceMaxMinor: 400000 });
+    state.add('wtp-open', { priceMinMinor: 50000, priceMaxMinor: 400000 });
+    const [ladder, open] = state
+      .items()
+      .slice(2)
+      .map((item) => item.block);
+    expect(ladder).toMatchObject({ pricesMinor: [50000, 100000, 200000, 300000, 400000] });
+    expect(open).toMatchObject({ maxMinor: 1200000 });
+    expect(state.problems()).toEqual([]);
+  });
+
   it('adds at the end when nothing is selected', () => {
     state.add('text');
     expect(ids()).toEqual(['consent', 'owns', 'text']);
@@ -72,7 +84,7 @@ describe('EditorState', () => {
         blockIndex: 2,
         blockId: 'price-ladder',
         path: 'pricesMinor.1',
-        message: 'Price 2 (200) must be higher than price 1 (300)',
+        message: 'Each price must be higher than the one before: price 2 is not',
       },
     ]);
     state.update(item.key, { ...ladder, pricesMinor: [200, 300] } as Block);

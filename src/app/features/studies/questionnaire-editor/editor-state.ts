@@ -1,7 +1,11 @@
 import { Injectable, computed, signal } from '@angular/core';
 import type { Block } from '@shared/questionnaire/block';
 import type { BlockKind } from '@shared/questionnaire/block-kind';
-import { freshBlockId, starterBlock } from '@shared/questionnaire/block-starters';
+import {
+  type StarterPriceRange,
+  freshBlockId,
+  starterBlock,
+} from '@shared/questionnaire/block-starters';
 import type { QuestionnaireDefinition } from '@shared/questionnaire/questionnaire-definition';
 import type { QuestionnaireProblem } from '@shared/questionnaire/questionnaire-problem';
 import { validateQuestionnaire } from '@shared/questionnaire/validate-questionnaire';
@@ -50,10 +54,14 @@ export class EditorState {
     this.changed.set(false);
   }
 
-  /** Adds a fresh block of `kind` after the selected block (or at the end) and selects it. */
-  add(kind: BlockKind): void {
+  /**
+   * Adds a fresh block of `kind` after the selected block (or at the end) and selects it; its
+   * amounts follow the study's price range when one is given.
+   */
+  add(kind: BlockKind, prices?: StarterPriceRange): void {
     const ids = this.itemList().map((item) => item.block.id);
-    const item = { key: this.nextKey++, block: starterBlock(kind, freshBlockId(kind, ids)) };
+    const block = starterBlock(kind, freshBlockId(kind, ids), prices);
+    const item = { key: this.nextKey++, block };
     const at = this.indexOf(this.selected());
     this.edit((list) => [
       ...list.slice(0, at + 1 || list.length),

@@ -21,7 +21,7 @@ import { problemFieldLabel } from './problem-field';
           <li>
             @if (row.blockIndex !== null) {
               <button type="button" class="problems__link" (click)="goTo.emit(row.blockIndex)">
-                Block {{ row.blockIndex + 1 }} · {{ row.where }}
+                {{ row.where }}
               </button>
             } @else {
               <span class="problems__where">Questionnaire</span>
@@ -76,12 +76,17 @@ export class ProblemList {
   readonly blocks = input.required<readonly Block[]>();
   readonly goTo = output<number>();
 
+  /** "Block 2 · Price ladder “ladder” · Price 3": where to look, in the editor's own words. */
   protected readonly rows = computed(() =>
     this.problems().map((problem) => {
-      const block = problem.blockIndex === null ? undefined : this.blocks()[problem.blockIndex];
-      const kind = block && blockKindLabels[block.kind] ? blockKindLabels[block.kind] : 'Block';
-      const field = problem.path ? ` · ${problemFieldLabel(problem.path)}` : '';
-      return { ...problem, where: `${kind} “${problem.blockId ?? '?'}”${field}` };
+      if (problem.blockIndex === null) return { ...problem, where: 'Questionnaire' };
+      const block = this.blocks()[problem.blockIndex];
+      const parts = [`Block ${problem.blockIndex + 1}`];
+      const kind = block ? blockKindLabels[block.kind] : undefined;
+      if (kind) parts.push(problem.blockId ? `${kind} “${problem.blockId}”` : kind);
+      const field = problemFieldLabel(problem.path, block?.kind);
+      if (field) parts.push(field);
+      return { ...problem, where: parts.join(' · ') };
     }),
   );
 }

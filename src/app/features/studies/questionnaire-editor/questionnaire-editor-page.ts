@@ -14,6 +14,7 @@ import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { RouterLink } from '@angular/router';
 import type { FieldIssue } from '@shared/http/api-error';
+import type { BlockKind } from '@shared/questionnaire/block-kind';
 import type {
   Questionnaire,
   QuestionnaireVersion,
@@ -25,13 +26,17 @@ import { StudiesApi } from '../studies-api';
 import { BlockList } from './block-list';
 import { BlockPalette } from './block-palette';
 import { EditorState } from './editor-state';
+import { serverIssueWhere } from './problem-field';
 import { ProblemList } from './problem-list';
 import { QuestionnairePreview } from './questionnaire-preview';
+import type { HoldsUnsavedChanges } from './unsaved-changes-guard';
 
 /**
  * The questionnaire editor: blocks to add, order and configure, every problem linked to its
  * block, and a live preview. A draft saves only when the shared rules find nothing wrong; a
- * published version is shown read-only, with a way to start the next draft from it.
+ * published version is shown read-only, with a way to start the next draft from it. Leaving
+ * with unsaved changes asks first: in the app through the route's guard, and on closing or
+ * reloading the tab through the browser's own prompt.
  */
 @Component({
   selector: 'app-questionnaire-editor-page',
@@ -51,8 +56,9 @@ import { QuestionnairePreview } from './questionnaire-preview';
   templateUrl: './questionnaire-editor-page.html',
   styleUrl: './questionnaire-editor-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
+  host: { '(window:beforeunload)': 'warnBeforeUnload($event)' },
 })
-export class QuestionnaireEditorPage implements OnInit {
+export class QuestionnaireEditorPage implements OnInit, HoldsUnsavedChanges {
   private readonly studies = inject(StudiesApi);
   private readonly api = inject(QuestionnairesApi);
   protected readonly state = inject(EditorState);
@@ -83,12 +89,33 @@ export class QuestionnaireEditorPage implements OnInit {
   );
   protected readonly blocks = computed(() => this.state.definition().blocks);
 
+  hasUnsavedChanges(): boolean {
+    return this.editable() && this.state.dirty();
+  }
+
   ngOnInit(): void {
     this.studies.get(this.studyId()).subscribe({
       next: (study) => this.study.set(study),
       error: (error: unknown) => this.failure.set(readApiProblem(error).message),
     });
     this.loadQuestionnaire();
+  }
+
+  /** New blocks take their amounts from the study's price range, once the study is known. */
+  protected addBlock(kind: BlockKind): void {
+    this.state.add(kind, this.study() ?? undefined);
+  }
+
+  /** A server issue's path in the words of the problem list. */
+  protected issueWhere(path: string): string {
+    return serverIssueWhere(path, (index) => this.blocks()[index]?.kind);
+  }
+
+  protected warnBeforeUnload(event: BeforeUnloadEvent): void {
+    if (!this.hasUnsavedChanges()) return;
+    event.preventDefault();
+    // Browsers that predate preventDefault() here only prompt when returnValue is set.
+    event.returnValue = true;
   }
 
   protected openVersion(version: number): void {

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
@@ -62,6 +62,13 @@ export class BlockSettings {
   readonly readOnly = input(false);
   readonly blockChange = output<Block>();
 
+  protected readonly problemRows = computed(() =>
+    this.problems().map((problem) => ({
+      field: problemFieldLabel(problem.path, this.block().kind),
+      message: problem.message,
+    })),
+  );
+
   protected patch(change: Partial<Block>): void {
     this.blockChange.emit({ ...this.block(), ...change } as Block);
   }
@@ -69,8 +76,6 @@ export class BlockSettings {
   protected setCondition(showIf: SkipCondition | undefined): void {
     this.patch({ showIf });
   }
-
-  protected readonly fieldLabel = problemFieldLabel;
 
   protected text(event: Event): string {
     return (event.target as HTMLInputElement).value;
