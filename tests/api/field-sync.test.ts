@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { count, eq, inArray } from 'drizzle-orm';
 import { fieldAssignmentsSchema } from '@shared/field-sync/field-assignments';
 import type { FieldInterview } from '@shared/field-sync/field-interview';
+import { qualityThresholds } from '@shared/field-sync/quality/quality-thresholds';
 import { syncBatchResultSchema, type SyncItemResult } from '@shared/field-sync/sync-batch';
 import type { StudyProgress } from '@shared/routes/route-progress';
 import { interviewPhotos, interviews } from '../../server/db/schema';
@@ -389,14 +390,18 @@ describe('quality flags computed on acceptance', () => {
     expect(row.flags).toEqual([]);
   });
 
-  it('flags an interview quicker than 5 s per answered block', async () => {
+  it('flags an interview quicker than the least time per answered block', async () => {
     const finishedAt = new Date().toISOString();
-    const startedAt = new Date(Date.now() - 12_000).toISOString(); // 5 blocks in 12 s
+    const startedAt = new Date(Date.now() - 12_000).toISOString(); // 4 answered blocks in 12 s
     const { result, row } = await syncOne(fieldInterview(setup, { startedAt, finishedAt }));
     expect(result).toMatchObject({ status: 'flagged' });
     expect(row.status).toBe('flagged');
     expect(row.flags).toEqual([
-      expect.objectContaining({ kind: 'too-short', answeredBlocks: 4, minSecondsPerBlock: 5 }),
+      expect.objectContaining({
+        kind: 'too-short',
+        answeredBlocks: 4,
+        minSecondsPerBlock: qualityThresholds.minSecondsPerAnsweredBlock,
+      }),
     ]);
   });
 

@@ -107,7 +107,7 @@ const problemRows = (): Promise<string[][]> =>
 describe('a supervisor plans field work', () => {
   it('finds the study under Field planning', async () => {
     await page.getByRole('button', { name: 'Navigation' }).click();
-    await page.getByRole('link', { name: 'Field planning' }).click();
+    await page.getByRole('link', { name: 'Field planning', exact: true }).click();
     await heading('Field planning').waitFor();
     await page.getByRole('link', { name: `Points and routes of ${studyName}` }).click();
     await heading(studyName).waitFor();

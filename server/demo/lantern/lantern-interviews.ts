@@ -1,4 +1,6 @@
 import { mulberry32 } from '@shared/estimation/random/mulberry32';
+import { qualityThresholds } from '@shared/field-sync/quality/quality-thresholds';
+import { tooShortFlag } from '@shared/field-sync/quality/too-short-flag';
 import { householdAnswers, shelfAnswers } from './lantern-answers';
 import { lanternSites, type LanternSite } from './lantern-sites';
 import { lanternFieldwork } from './lantern-study';
@@ -19,7 +21,8 @@ export interface LanternInterview {
 /**
  * Every demo interview, drawn from the truths with a seeded generator: the same interviews,
  * ids and answers on every machine. One household in 25 carries a "too short" flag that a
- * supervisor reviewed and accepted, so the flag filter has something to do.
+ * supervisor reviewed and accepted, so the flag filter has something to do; that flag is raised by
+ * the live check on a duration below the live limit, so the demo reads as the app judges.
  */
 export function lanternInterviews(): LanternInterview[] {
   const uniform = mulberry32(lanternTruths.seed);
@@ -41,27 +44,26 @@ export function lanternInterviews(): LanternInterview[] {
           day * 86_400_000 +
           uniform() * 8 * 3_600_000,
       );
+      const answeredBlocks = Object.keys(answers).length;
+      const finishedAt = new Date(
+        startedAt.getTime() + (flagged ? rushedSeconds(answeredBlocks) : minutes * 60) * 1000,
+      );
+      const flag = tooShortFlag(startedAt.toISOString(), finishedAt.toISOString(), answeredBlocks);
       interviews.push({
         id,
         site,
         questionnaire: shop ? 'shelf' : 'household',
         answers,
-        flags: flagged ? [tooShort(minutes)] : [],
+        flags: flagged && flag ? [flag] : [],
         startedAt,
-        finishedAt: new Date(startedAt.getTime() + (flagged ? 2 : minutes) * 60_000),
+        finishedAt,
       });
     }
   }
   return interviews;
 }
 
-function tooShort(minutes: number) {
-  const seconds = Math.round(Math.min(minutes, 2) * 60);
-  return {
-    kind: 'too-short',
-    durationSeconds: seconds,
-    answeredBlocks: 8,
-    secondsPerBlock: seconds / 8,
-    minSecondsPerBlock: 20,
-  };
+/** Three quarters of the live limit per block: clearly too quick, yet a plausible rush. */
+function rushedSeconds(answeredBlocks: number): number {
+  return Math.round(answeredBlocks * qualityThresholds.minSecondsPerAnsweredBlock * 0.75);
 }

@@ -1,6 +1,11 @@
 import { z } from 'zod';
 
-const thresholdFields = ['tooCheapMinor', 'cheapMinor', 'expensiveMinor', 'tooExpensiveMinor'];
+const thresholdFields = [
+  'tooCheapMinor',
+  'cheapMinor',
+  'expensiveMinor',
+  'tooExpensiveMinor',
+] as const;
 
 /** Faster than `minSecondsPerBlock` seconds per answered block. */
 export const tooShortFlagSchema = z.object({

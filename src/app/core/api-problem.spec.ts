@@ -28,6 +28,40 @@ describe('readApiProblem', () => {
     expect(readApiProblem(response(0, new ProgressEvent('error'))).message).toMatch(/cannot reach/);
   });
 
+  it('says the device is offline when a request fails with no network', () => {
+    vi.spyOn(navigator, 'onLine', 'get').mockReturnValue(false);
+    const offline =
+      'This device is offline. Fieldcurve will load this once the connection is back.';
+    expect(readApiProblem(response(0, new ProgressEvent('error')))).toMatchObject({
+      code: 'network',
+      message: offline,
+    });
+    // The service worker's own answer to a request it could not send.
+    expect(readApiProblem(response(504, null)).message).toBe(offline);
+    vi.restoreAllMocks();
+  });
+
+  it('does not blame the server for a gateway time-out with no body', () => {
+    expect(readApiProblem(response(504, null)).message).toMatch(/cannot reach/);
+    expect(readApiProblem(response(500, null)).message).toBe(
+      'The server ran into a problem. Try again in a moment.',
+    );
+  });
+
+  it('words a role refusal plainly, without naming roles', () => {
+    const refusal = (message: string) =>
+      readApiProblem(response(403, { error: { code: 'forbidden', message } })).message;
+    expect(refusal('This needs the researcher or supervisor or enumerator role.')).toBe(
+      'This page is not open to your account.',
+    );
+    expect(refusal('This needs the supervisor role in this study.')).toBe(
+      'This page is not open to your account in this study.',
+    );
+    expect(refusal('Only the study’s supervisors may assign routes.')).toBe(
+      'Only the study’s supervisors may assign routes.',
+    );
+  });
+
   it('falls back to the status when the body is not an API error', () => {
     expect(readApiProblem(response(418, '<html>')).message).toBe('The request failed (HTTP 418).');
     expect(readApiProblem(response(403, null)).message).toBe(

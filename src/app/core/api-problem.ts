@@ -1,5 +1,6 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import type { ApiError, FieldIssue } from '@shared/http/api-error';
+import { notOpenToYourAccount } from './access-words';
 
 /** What the client needs to know about a failed API call, in words a person can act on. */
 export interface ApiProblem {
@@ -11,11 +12,20 @@ export interface ApiProblem {
 
 const fallbackMessages: Record<number, string> = {
   0: 'Fieldcurve cannot reach its server. Check the connection and try again.',
+  // What the service worker answers when the network is gone: no server ever saw the request.
+  504: 'Fieldcurve cannot reach its server. Check the connection and try again.',
   401: 'You are signed out. Sign in again to carry on.',
   403: 'Your roles do not allow this action.',
   404: 'That item no longer exists.',
   409: 'Someone changed this at the same time. Reload and try again.',
 };
+
+const offlineMessage =
+  'This device is offline. Fieldcurve will load this once the connection is back.';
+
+// The server's role refusal names roles ("This needs the researcher or supervisor role."):
+// readers get the plain sentence the route guard uses.
+const roleRefusal = /^This needs the [a-z ]+ role( in this study)?\.$/;
 
 /** Reads the `{ error: { code, message, issues? } }` body the API sends, or explains the status. */
 export function readApiProblem(error: unknown): ApiProblem {
@@ -25,9 +35,12 @@ export function readApiProblem(error: unknown): ApiProblem {
     return {
       status,
       code: body.error.code,
-      message: body.error.message,
+      message: plainRefusal(body.error.code, body.error.message),
       issues: body.error.issues ?? [],
     };
+  }
+  if ((status === 0 || status === 504) && globalThis.navigator?.onLine === false) {
+    return { status, code: 'network', message: offlineMessage, issues: [] };
   }
   const message =
     fallbackMessages[status] ??
@@ -35,6 +48,12 @@ export function readApiProblem(error: unknown): ApiProblem {
       ? 'The server ran into a problem. Try again in a moment.'
       : `The request failed (HTTP ${status}).`);
   return { status, code: status === 0 ? 'network' : `http-${status}`, message, issues: [] };
+}
+
+function plainRefusal(code: string, message: string): string {
+  const refused = code === 'forbidden' ? roleRefusal.exec(message) : null;
+  if (!refused) return message;
+  return refused[1] ? notOpenToYourAccount.replace('.', `${refused[1]}.`) : notOpenToYourAccount;
 }
 
 function isFieldIssue(value: unknown): boolean {

@@ -6,6 +6,7 @@ import { Router, provideRouter } from '@angular/router';
 import type { Role } from '@shared/auth/roles';
 import { signInAs } from '../testing/sign-in-as';
 import { roleGuard, signedInGuard } from './auth-guard';
+import { Notices } from './notices';
 import { Session } from './session';
 
 @Component({ template: '' })
@@ -13,10 +14,13 @@ class Blank {}
 
 describe('auth guards', () => {
   let router: Router;
+  const show = vi.fn();
 
   beforeEach(() => {
+    show.mockReset();
     TestBed.configureTestingModule({
       providers: [
+        { provide: Notices, useValue: { show } },
         provideHttpClient(),
         provideHttpClientTesting(),
         provideRouter([
@@ -50,12 +54,17 @@ describe('auth guards', () => {
     expect(await landingAfter('/members', ['admin'])).toBe('/members');
   });
 
-  it('sends someone without the role back home', async () => {
+  it('sends someone without the role back home, saying in plain words why', async () => {
     expect(await landingAfter('/members', ['researcher', 'client'])).toBe('/');
+    expect(show).toHaveBeenCalledTimes(1);
+    const notice = String(show.mock.calls[0][0]);
+    expect(notice).toBe('This page is not open to your account. Here is your home page instead.');
+    expect(notice).not.toMatch(/role|admin/i);
   });
 
-  it('admits anyone holding one of several allowed roles', async () => {
+  it('admits anyone holding one of several allowed roles, without a notice', async () => {
     expect(await landingAfter('/review', ['researcher'])).toBe('/review');
+    expect(show).not.toHaveBeenCalled();
   });
 
   it('sends a signed-out visitor to the welcome page, remembering where they were going', async () => {
@@ -66,6 +75,7 @@ describe('auth guards', () => {
     await loaded;
     await router.navigateByUrl('/members');
     expect(router.url).toBe('/welcome?returnTo=%2Fmembers');
+    expect(show).not.toHaveBeenCalled();
   });
 
   it('sends a signed-out visitor of the home page to the welcome page too', async () => {

@@ -1,15 +1,28 @@
 import type { Role } from '@shared/auth/roles';
 
+/** A figure the home page can show beside a role, from data the app already fetches. */
+export type HomeCountKind = 'studies' | 'routesOnDevice' | 'schedules';
+
+/** A page of the role, linked from its card. */
+export interface RoleLink {
+  readonly label: string;
+  readonly path: string;
+}
+
 /** What the home page tells a person about one of their roles. */
 export interface RoleWelcome {
   readonly icon: string;
   /** What this role does in Fieldcurve. */
   readonly summary: string;
-  /** What happens next for this role, given what the product offers today. */
+  /** Where the role's work happens in the app today. */
   readonly next: string;
-  /** A page that exists now and is the natural first step, if there is one. */
-  readonly action?: { readonly label: string; readonly path: string };
+  /** The role's main pages, the usual first one first. */
+  readonly links: readonly RoleLink[];
+  /** A figure that tells where the work stands, in words for any count (0 included). */
+  readonly count?: { readonly of: HomeCountKind; readonly words: (count: number) => string };
 }
+
+const plural = (count: number, one: string, many: string) => `${count} ${count === 1 ? one : many}`;
 
 export const roleWelcomes: Readonly<Record<Role, RoleWelcome>> = {
   admin: {
@@ -18,9 +31,13 @@ export const roleWelcomes: Readonly<Record<Role, RoleWelcome>> = {
       'You decide who belongs to your organisation and what each person may do: invite ' +
       'colleagues by e-mail, give them roles, and keep an eye on the services Fieldcurve needs.',
     next:
-      'Start by inviting your researchers and supervisors. Each invitation stays open for a ' +
-      'limited time; you can see which ones are still waiting.',
-    action: { label: 'Manage members', path: '/members' },
+      'Invite researchers, supervisors, enumerators and clients under Members and give each ' +
+      'the roles they need; you can see which invitations are still waiting. System health ' +
+      'shows whether the services behind Fieldcurve are running.',
+    links: [
+      { label: 'Go to members', path: '/members' },
+      { label: 'Go to system health', path: '/system-health' },
+    ],
   },
   researcher: {
     icon: 'query_stats',
@@ -28,8 +45,18 @@ export const roleWelcomes: Readonly<Record<Role, RoleWelcome>> = {
       'You design studies and questionnaires, clean and weight the answers, fit demand ' +
       'models and publish demand schedules and reports for your clients.',
     next:
-      'Study and questionnaire design are on their way. They will appear in the menu here ' +
-      'as soon as they are ready for your organisation.',
+      'Create a study and its questionnaire under Studies, and publish a version for the ' +
+      'field. As interviews come in, fit and compare demand models under Analysis and publish ' +
+      'schedules for your clients.',
+    links: [
+      { label: 'Go to studies', path: '/studies' },
+      { label: 'Go to analysis', path: '/analysis' },
+    ],
+    count: {
+      of: 'studies',
+      words: (n) =>
+        n === 0 ? 'You are in no study yet.' : `You are in ${plural(n, 'study', 'studies')}.`,
+    },
   },
   supervisor: {
     icon: 'map',
@@ -37,8 +64,20 @@ export const roleWelcomes: Readonly<Record<Role, RoleWelcome>> = {
       'You plan the sites and routes of a study, set quotas, assign routes to enumerators ' +
       'and review the interviews that quality checks flag.',
     next:
-      'Route planning opens once a researcher has set up a study. You will then upload ' +
-      'sampling points and group them into routes from this menu.',
+      'Under Field planning, upload a study’s sampling points, group them into routes with ' +
+      'quotas and assign them; the enumerator gets an e-mail. Interviews the quality checks ' +
+      'flag wait for your decision in the review queue.',
+    links: [
+      { label: 'Go to field planning', path: '/field-planning' },
+      { label: 'Go to the review queue', path: '/review' },
+    ],
+    count: {
+      of: 'studies',
+      words: (n) =>
+        n === 0
+          ? 'No study is open to you yet: a researcher adds you to one.'
+          : `${plural(n, 'study is', 'studies are')} open to you.`,
+    },
   },
   enumerator: {
     icon: 'directions_walk',
@@ -46,8 +85,20 @@ export const roleWelcomes: Readonly<Record<Role, RoleWelcome>> = {
       'You visit the sites on your routes, run the questionnaires and record shop prices, ' +
       'also where there is no network. Your answers are kept on the device until they sync.',
     next:
-      'When a supervisor assigns you a route you will get an e-mail. Open Fieldcurve once ' +
-      'while online so your device keeps the route for offline work.',
+      'Your assigned routes are under My routes; the device keeps them for work without a ' +
+      'network. Finished interviews wait on the device until they are sent: Sync shows what ' +
+      'is still to go.',
+    links: [
+      { label: 'Go to my routes', path: '/field/routes' },
+      { label: 'Go to sync', path: '/field/sync' },
+    ],
+    count: {
+      of: 'routesOnDevice',
+      words: (n) =>
+        n === 0
+          ? 'No route is on this device yet: open My routes while online to fetch yours.'
+          : `${plural(n, 'route is', 'routes are')} on this device.`,
+    },
   },
   client: {
     icon: 'description',
@@ -55,8 +106,16 @@ export const roleWelcomes: Readonly<Record<Role, RoleWelcome>> = {
       'You receive the published demand schedules and reports of the studies shared with ' +
       'you, and can download them as CSV, XLSX or PDF.',
     next:
-      'You will get an e-mail as soon as a study team publishes a schedule for you; it will ' +
-      'then be listed here.',
+      'Reports lists what the study teams have published for you, ready to download. You get ' +
+      'an e-mail whenever a new version is published.',
+    links: [{ label: 'Go to reports', path: '/reports' }],
+    count: {
+      of: 'schedules',
+      words: (n) =>
+        n === 0
+          ? 'Nothing has been published for you yet.'
+          : `${plural(n, 'published schedule is', 'published schedules are')} shared with you.`,
+    },
   },
 };
 

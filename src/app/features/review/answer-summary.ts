@@ -1,16 +1,10 @@
 import { formatMoney } from '@shared/money/format-money';
 import type { Block } from '@shared/questionnaire/block';
 import { thresholdQuestions } from '@shared/questionnaire/blocks/price-thresholds-block';
+import { thresholdNames } from './threshold-names';
 
 type Money = (minor: number) => string;
 type Answer = Record<string, unknown>;
-
-const thresholdNames: Record<string, string> = {
-  tooCheapMinor: 'too cheap',
-  cheapMinor: 'a bargain',
-  expensiveMinor: 'expensive',
-  tooExpensiveMinor: 'too expensive',
-};
 
 /**
  * One block's answer in words a supervisor reads at a glance, with amounts in the study's

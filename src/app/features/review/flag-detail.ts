@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { RouterLink } from '@angular/router';
 import { qualityFlagLabels, type QualityFlag } from '@shared/field-sync/quality/quality-flag';
+import type { Block } from '@shared/questionnaire/block';
 import { flagDetail, interviewReference } from './review-words';
 
 /**
@@ -37,6 +38,8 @@ import { flagDetail, interviewReference } from './review-words';
 export class FlagDetail {
   readonly flag = input.required<QualityFlag>();
   readonly studyId = input.required<string>();
+  /** The interview's questionnaire, to name a flagged block by its question. */
+  readonly blocks = input<readonly Block[]>([]);
 
   protected readonly duplicateLabel = qualityFlagLabels['duplicate-respondent'];
   protected readonly interviewReference = interviewReference;
@@ -44,5 +47,5 @@ export class FlagDetail {
     const flag = this.flag();
     return flag.kind === 'duplicate-respondent' ? flag.otherInterviewIds : null;
   });
-  protected readonly text = computed(() => flagDetail(this.flag()));
+  protected readonly text = computed(() => flagDetail(this.flag(), this.blocks()));
 }

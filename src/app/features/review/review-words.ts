@@ -1,6 +1,8 @@
 import type { QualityFlag } from '@shared/field-sync/quality/quality-flag';
 import { qualityFlagLabels } from '@shared/field-sync/quality/quality-flag';
 import type { InterviewStatus } from '@shared/interviews/interview-status';
+import type { Block } from '@shared/questionnaire/block';
+import { thresholdNames } from './threshold-names';
 
 export const statusLabels: Readonly<Record<InterviewStatus, string>> = {
   received: 'Received',
@@ -10,8 +12,12 @@ export const statusLabels: Readonly<Record<InterviewStatus, string>> = {
   rejected: 'Rejected',
 };
 
-/** A flag's label with the figure that raised it, as the supervisor reads it. */
-export function flagDetail(flag: QualityFlag): string {
+/**
+ * A flag's label with the figure that raised it, as the supervisor reads it. With the
+ * questionnaire's blocks at hand a flagged block is named by its question; without them (the
+ * queue lists no questionnaire) by its kind, never by its internal id.
+ */
+export function flagDetail(flag: QualityFlag, blocks: readonly Block[] = []): string {
   const label = qualityFlagLabels[flag.kind];
   switch (flag.kind) {
     case 'gps-far':
@@ -21,14 +27,24 @@ export function flagDetail(flag: QualityFlag): string {
     case 'too-short':
       return `${label}: ${flag.secondsPerBlock.toFixed(1)} s per answered block (at least ${flag.minSecondsPerBlock} s expected)`;
     case 'straight-lining':
-      return `${label}: "${flag.response}" at all ${flag.steps} prices of ${flag.blockId}`;
+      return `${label}: "${flag.response}" at all ${flag.steps} prices of ${
+        blockName(blocks, flag.blockId) ?? 'the price ladder'
+      }`;
     case 'thresholds-out-of-order':
-      return `${label} in ${flag.blockId}: ${flag.violations
-        .map((v) => `${v.lower} above ${v.higher}`)
+      return `${label} in ${blockName(blocks, flag.blockId) ?? 'the price thresholds question'}: ${flag.violations
+        .map((v) => `“${thresholdNames[v.lower]}” above “${thresholdNames[v.higher]}”`)
         .join(', ')}`;
     case 'duplicate-respondent':
       return `${label}: same respondent as ${flag.otherInterviewIds.map(interviewReference).join(', ')}`;
   }
+}
+
+/** The question a block puts, quoted and cut to a line; null when the block is not known. */
+function blockName(blocks: readonly Block[], blockId: string): string | null {
+  const prompt = blocks.find((block) => block.id === blockId)?.prompt.trim();
+  if (!prompt) return null;
+  const line = prompt.length > 60 ? `${prompt.slice(0, 59).trimEnd()}…` : prompt;
+  return `“${line}”`;
 }
 
 /** An interview named in words by the first group of its id, as supervisors quote it. */

@@ -6,8 +6,11 @@ import {
   signal,
   type OnInit,
 } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
+import { DateAdapter, MAT_DATE_FORMATS } from '@angular/material/core';
 import { MatDatepickerModule } from '@angular/material/datepicker';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
@@ -23,6 +26,7 @@ import { PlanningStudy } from '../planning-study';
 import { PointPicker } from './point-picker';
 import { RouteBuilderState } from './route-builder-state';
 import { StopListEditor } from './stop-list-editor';
+import { dayExample, windowDayProblem, type WindowEnd } from './window-day-problem';
 
 /** Builds a new route or changes one: points in visiting order, quotas, dates and enumerator. */
 @Component({
@@ -36,6 +40,7 @@ import { StopListEditor } from './stop-list-editor';
     MatProgressBar,
     MatSelectModule,
     PointPicker,
+    ReactiveFormsModule,
     RouterLink,
     StopListEditor,
   ],
@@ -58,6 +63,26 @@ export class RouteBuilderPage implements OnInit {
   protected readonly saving = signal(false);
   protected readonly failure = signal<string | null>(null);
 
+  /**
+   * The window as form controls: the date inputs own what is being typed, so a half-typed day is
+   * never overwritten by the last saved one; each change is handed to the state.
+   */
+  protected readonly dates = new FormGroup({
+    start: new FormControl<Date | null>(null),
+    end: new FormControl<Date | null>(null),
+  });
+  protected readonly windowEnds: readonly WindowEnd[] = ['windowStart', 'windowEnd'];
+  protected readonly example = dayExample(
+    inject<DateAdapter<Date>>(DateAdapter),
+    inject(MAT_DATE_FORMATS),
+  );
+
+  constructor() {
+    this.dates.valueChanges.pipe(takeUntilDestroyed()).subscribe(({ start, end }) => {
+      this.state.setWindow(start ? toIsoDay(start) : '', end ? toIsoDay(end) : '');
+    });
+  }
+
   ngOnInit(): void {
     const studyId = this.planning.studyId();
     const routeId = this.routeId();
@@ -72,6 +97,10 @@ export class RouteBuilderPage implements OnInit {
         this.api.route(studyId, routeId).subscribe({
           next: (route) => {
             this.state.load(route);
+            this.dates.setValue(
+              { start: fromIsoDay(route.windowStart), end: fromIsoDay(route.windowEnd) },
+              { emitEvent: false },
+            );
             this.loading.set(false);
           },
           error: (error: unknown) => this.fail(error),
@@ -81,12 +110,9 @@ export class RouteBuilderPage implements OnInit {
     });
   }
 
-  protected dateOf(day: string): Date | null {
-    return day ? fromIsoDay(day) : null;
-  }
-
-  protected changeWindow(start: Date | null, end: Date | null): void {
-    this.state.setWindow(start ? toIsoDay(start) : '', end ? toIsoDay(end) : '');
+  protected windowProblemAt(end: WindowEnd): string | null {
+    const day = end === 'windowStart' ? this.state.windowStart() : this.state.windowEnd();
+    return windowDayProblem(end, day, this.state.problemAt(end), this.example);
   }
 
   protected nameFrom(event: Event): string {

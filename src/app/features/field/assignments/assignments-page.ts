@@ -1,17 +1,23 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { MatButton } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
+import { fromEvent } from 'rxjs';
 import type { FieldRoute } from '@shared/routes/field-route';
 import { describeSyncFailure } from '../sync/sync-failure';
 import { AssignmentsCache } from './assignments-cache';
 import { studyOf } from './assignment-lookup';
 import { PointProgress, noCounts, type PointCounts } from './point-progress';
+import { localDay, routeWindowState } from './route-window';
 
-/** "My routes": the enumerator's routes as kept on the device, with progress at each. */
+/**
+ * "My routes": the enumerator's routes as kept on the device, with what this device recorded on
+ * each (the device has no other devices' interviews, so it never claims the route's total) and
+ * whether the route's dates are over. Updates when asked and whenever the connection comes back.
+ */
 @Component({
   selector: 'app-assignments-page',
   imports: [DatePipe, MatButton, MatCardModule, MatIcon, RouterLink],
@@ -31,6 +37,8 @@ export class AssignmentsPage {
   protected readonly fetchedAt = computed(() => this.cached()?.fetchedAt ?? null);
   protected readonly refreshProblem = signal<string | null>(null);
   protected readonly refreshing = signal(false);
+  protected readonly offline = signal(globalThis.navigator?.onLine === false);
+  private readonly today = signal(localDay(new Date()));
 
   protected readonly routes = computed(() => {
     const assignments = this.assignments();
@@ -38,6 +46,7 @@ export class AssignmentsPage {
     return assignments.routes.map((route) => ({
       route,
       study: studyOf(assignments, route.studyId),
+      window: routeWindowState(route, this.today()),
       ...this.totals(route),
     }));
   });
@@ -53,12 +62,20 @@ export class AssignmentsPage {
   });
 
   constructor() {
+    fromEvent(window, 'offline')
+      .pipe(takeUntilDestroyed())
+      .subscribe(() => this.offline.set(true));
+    fromEvent(window, 'online')
+      .pipe(takeUntilDestroyed())
+      .subscribe(() => void this.refresh());
     void this.refresh();
   }
 
   /** Fetches the latest assignments when online; the device's copy stays when not. */
   protected async refresh(): Promise<void> {
-    if (globalThis.navigator?.onLine === false) return;
+    this.today.set(localDay(new Date()));
+    this.offline.set(globalThis.navigator?.onLine === false);
+    if (this.offline()) return;
     this.refreshing.set(true);
     try {
       await this.cache.refresh();
