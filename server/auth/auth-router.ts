@@ -51,7 +51,7 @@ export function authRouter({ db, identity }: AppDependencies): Router {
         .send(
           signInProblemPage(
             'This invitation cannot be used',
-            'It has already been accepted or it has expired. Ask your administrator to send a new one.',
+            'It has already been accepted or withdrawn, or it has expired. Ask your administrator to send a new one.',
           ),
         );
       return;
@@ -100,7 +100,7 @@ export function authRouter({ db, identity }: AppDependencies): Router {
         outcome.kind === 'invitation-other-email'
           ? `The invitation was sent to ${outcome.invitedEmail}, but you signed in as ${who.email}. Sign in with the invited address.`
           : outcome.kind === 'invitation-invalid'
-            ? 'The invitation has already been accepted or has expired.'
+            ? 'The invitation has already been accepted or withdrawn, or it has expired.'
             : `${who.email} is not a member of any Fieldcurve organisation yet. Ask an administrator for an invitation.`;
       res.status(403).send(signInProblemPage('No access yet', message));
       return;

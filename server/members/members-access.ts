@@ -5,4 +5,5 @@ export const membersAccess: readonly AccessRule[] = [
   { method: 'PUT', path: '/api/members/:userId/roles', access: ['admin'] },
   { method: 'GET', path: '/api/invitations', access: ['admin'] },
   { method: 'POST', path: '/api/invitations', access: ['admin'] },
+  { method: 'DELETE', path: '/api/invitations/:invitationId', access: ['admin'] },
 ];

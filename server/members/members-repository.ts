@@ -1,7 +1,7 @@
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, sql } from 'drizzle-orm';
 import type { Member } from '@shared/members/member';
 import type { Role } from '@shared/auth/role';
-import type { Database } from '../db/database';
+import type { Database, Executor } from '../db/database';
 import { memberships, users } from '../db/schema';
 import { HttpError, notFound } from '../http/http-error';
 
@@ -19,6 +19,26 @@ export async function listMembers(db: Database, organisationId: string): Promise
     .where(eq(memberships.organisationId, organisationId))
     .orderBy(asc(users.name));
   return rows.map((row) => ({ ...row, joinedAt: row.joinedAt.toISOString() }));
+}
+
+/** The member of the organisation with this e-mail address (compared without case), if any. */
+export async function findMemberByEmail(
+  db: Executor,
+  organisationId: string,
+  email: string,
+): Promise<{ userId: string; name: string } | undefined> {
+  const [row] = await db
+    .select({ userId: users.id, name: users.name })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(
+      and(
+        eq(memberships.organisationId, organisationId),
+        eq(sql`lower(${users.email})`, email.toLowerCase()),
+      ),
+    )
+    .limit(1);
+  return row;
 }
 
 /**

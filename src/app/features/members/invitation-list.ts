@@ -1,5 +1,6 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
+import { MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { roleLabels } from '@shared/auth/roles';
 import type { Invitation } from '@shared/members/invitation';
@@ -10,16 +11,17 @@ const statusLabels: Record<Invitation['status'], { text: string; icon: string }>
   expired: { text: 'Expired', icon: 'timer_off' },
 };
 
-/** Invitations sent so far, those still waiting first. */
+/** Invitations sent so far, those still waiting first; a waiting one can be withdrawn. */
 @Component({
   selector: 'app-invitation-list',
-  imports: [DatePipe, MatIcon],
+  imports: [DatePipe, MatButton, MatIcon],
   templateUrl: './invitation-list.html',
   styleUrl: './invitation-list.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class InvitationList {
   readonly invitations = input.required<readonly Invitation[]>();
+  readonly withdraw = output<Invitation>();
 
   protected readonly statusLabels = statusLabels;
   protected readonly sorted = computed(() =>

@@ -87,6 +87,24 @@ describe('InviteForm', () => {
     );
   });
 
+  it('shows the refusal to invite a member beside the e-mail and announces nothing', async () => {
+    type('name', 'Rosa Lindqvist');
+    type('email', 'rosa@example.org');
+    tick('Client');
+    await submit();
+    const message =
+      'Rosa Lindqvist (rosa@example.org) is already a member. Change their roles in the list of people instead.';
+    server
+      .expectOne('/api/invitations')
+      .flush(
+        { error: { code: 'already-member', message, issues: [{ path: 'email', message }] } },
+        { status: 409, statusText: 'Conflict' },
+      );
+    await fixture.whenStable();
+    expect(errorOf('email')).toBe(message);
+    expect(element.textContent).not.toContain('Invitation sent');
+  });
+
   it('announces the invitation and clears the form once the server accepts it', async () => {
     const sent: Invitation[] = [];
     fixture.componentInstance.invited.subscribe((i) => sent.push(i));

@@ -31,4 +31,9 @@ export class MembersApi {
   invite(request: InvitationRequest): Observable<Invitation> {
     return this.http.post<Invitation>('/api/invitations', request, this.quiet);
   }
+
+  /** Withdraws an invitation not yet accepted; its link stops working. */
+  withdrawInvitation(invitationId: string): Observable<unknown> {
+    return this.http.delete(`/api/invitations/${encodeURIComponent(invitationId)}`, this.quiet);
+  }
 }

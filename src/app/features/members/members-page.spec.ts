@@ -80,6 +80,47 @@ describe('MembersPage', () => {
     expect(item?.textContent).toContain('Supervisor');
   });
 
+  it('offers to withdraw waiting invitations only', async () => {
+    const accepted: Invitation = {
+      ...invitations[0],
+      id: '1a2b3c4d-5e6f-4a7b-8c9d-0e1f2a3b4c5d',
+      name: 'Oskar Lindgren',
+      status: 'accepted',
+    };
+    const page = await renderWith(members, [...invitations, accepted]);
+    const items = Array.from(page.querySelectorAll('.invitation'));
+    const withdrawOf = (name: string) =>
+      items.find((i) => i.textContent?.includes(name))?.querySelector('.invitation__withdraw');
+    expect(withdrawOf('Lena Brandt')?.getAttribute('aria-label')).toBe(
+      'Withdraw the invitation to lena@example.org',
+    );
+    expect(withdrawOf('Oskar Lindgren')).toBeNull();
+  });
+
+  it('withdraws an invitation after confirmation and drops it from the list', async () => {
+    const fixture = TestBed.createComponent(MembersPage);
+    server.expectOne('/api/members').flush(members);
+    server.expectOne('/api/invitations').flush(invitations);
+    await fixture.whenStable();
+    const page = fixture.nativeElement as HTMLElement;
+    page.querySelector<HTMLButtonElement>('.invitation__withdraw')!.click();
+    await fixture.whenStable();
+    const confirm = Array.from(document.querySelectorAll('mat-dialog-container button')).find((b) =>
+      b.textContent?.includes('Withdraw invitation'),
+    ) as HTMLButtonElement;
+    expect(confirm).toBeDefined();
+    server.expectNone(`/api/invitations/${invitations[0].id}`);
+    confirm.click();
+    const request = server.expectOne(`/api/invitations/${invitations[0].id}`);
+    expect(request.request.method).toBe('DELETE');
+    request.flush(null, { status: 204, statusText: 'No Content' });
+    // The dialog reports its result only once its closing animation has run.
+    await new Promise((resolve) => setTimeout(resolve, 300));
+    await fixture.whenStable();
+    expect(page.querySelector('.invitation')).toBeNull();
+    expect(page.textContent).toContain('No invitations yet.');
+  });
+
   it('says so when nobody has joined', async () => {
     const page = await renderWith([], []);
     expect(page.querySelectorAll('tr.members-table__row')).toHaveLength(0);

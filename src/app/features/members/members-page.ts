@@ -13,6 +13,7 @@ import { InviteForm } from './invite-form';
 import { MemberTable } from './member-table';
 import { MembersApi } from './members-api';
 import { RoleDialog, RoleDialogData } from './role-dialog';
+import { WithdrawDialog, type WithdrawDialogData } from './withdraw-dialog';
 
 /** The administrator's view of who belongs to the organisation and who has been invited. */
 @Component({
@@ -73,6 +74,24 @@ export class MembersPage {
         if (!saved) return;
         this.snackBar.open(`Roles of ${member.name} saved.`, 'Close', { duration: 5000 });
         this.loadMembers();
+      });
+  }
+
+  protected confirmWithdrawal(invitation: Invitation): void {
+    const data: WithdrawDialogData = { invitation };
+    this.dialog
+      .open<WithdrawDialog, WithdrawDialogData, boolean>(WithdrawDialog, {
+        data,
+        width: '28rem',
+        maxWidth: '95vw',
+      })
+      .afterClosed()
+      .subscribe((withdrawn) => {
+        if (!withdrawn) return;
+        this.invitations.update((list) => list.filter((i) => i.id !== invitation.id));
+        this.snackBar.open(`Invitation to ${invitation.email} withdrawn.`, 'Close', {
+          duration: 5000,
+        });
       });
   }
 

@@ -19,10 +19,12 @@ import { DatePipe } from '@angular/common';
 import { analysisMethodLabels } from '@shared/analysis/analysis-method';
 import type { FitResource } from '@shared/analysis/fit-resource';
 import { AnalysisWorkspaceState } from '../analysis-workspace-state';
-import type { BandedCurve } from '../charts/banded-curve';
-import { DemandChart } from '../charts/demand-chart';
+import { evenPrices, type BandedCurve } from '../charts/banded-curve';
 import { demandAxisTitles, fitBandedCurve } from '../charts/fit-curves';
+import { fitDistinctions } from '../results/fit-distinctions';
+import { ComparisonChart } from './comparison-chart';
 import { comparisonCurves, mixedKinds, type ComparisonScale } from './comparison-curves';
+import { defaultIndexPrice } from './index-price';
 
 /** Up to six curves stay readable on one chart. */
 const maxCurves = 6;
@@ -31,8 +33,8 @@ const maxCurves = 6;
 @Component({
   selector: 'app-fit-comparison-page',
   imports: [
+    ComparisonChart,
     DatePipe,
-    DemandChart,
     FormsModule,
     MatButtonToggleModule,
     MatCardModule,
@@ -56,18 +58,28 @@ export class FitComparisonPage {
       .map((fit) => fit.id),
   );
   private readonly loaded = signal<readonly FitResource[]>([]);
-  protected readonly referencePrice = linkedSignal<number>(() => this.defaultReference());
+  private readonly chosenFits = computed(() =>
+    this.loaded().filter((fit) => this.chosenIds().includes(fit.id)),
+  );
+  /** The price the researcher typed; until then the default below. */
+  private readonly referenceChoice = signal<number | null>(null);
   private readonly scaleChoice = signal<ComparisonScale | null>(null);
+  protected readonly distinctions = computed(() =>
+    fitDistinctions(this.state.finishedFits(), this.state.format()),
+  );
 
-  protected readonly rawCurves = computed(() =>
-    this.loaded()
-      .filter((fit) => this.chosenIds().includes(fit.id))
-      .flatMap((fit): BandedCurve[] => {
-        const curve = fit.result
-          ? fitBandedCurve(this.curveLabel(fit), fit.spec, fit.result)
-          : null;
-        return curve ? [curve] : [];
-      }),
+  protected readonly rawCurves = computed(() => {
+    const labels = this.curveLabels(this.chosenFits());
+    return this.chosenFits().flatMap((fit): BandedCurve[] => {
+      const curve = fit.result ? fitBandedCurve(labels.get(fit.id)!, fit.spec, fit.result) : null;
+      return curve ? [curve] : [];
+    });
+  });
+  protected readonly referencePrice = computed(
+    () =>
+      this.referenceChoice() ??
+      defaultIndexPrice(this.rawCurves(), this.gridPrices()) ??
+      this.setupMiddle(),
   );
   protected readonly mixed = computed(() => mixedKinds(this.rawCurves()));
   protected readonly scale = computed(
@@ -80,9 +92,8 @@ export class FitComparisonPage {
     const currency = this.state.study()?.currency ?? '';
     const kind = this.rawCurves()[0]?.quantityKind ?? 'quantity';
     const titles = demandAxisTitles(kind, currency);
-    return this.scale() === 'indexed'
-      ? { ...titles, y: `Demand index (100 at ${this.referencePrice()} ${currency})` }
-      : titles;
+    const price = this.state.format()?.value(this.referencePrice(), 'price') ?? '';
+    return this.scale() === 'indexed' ? { ...titles, y: `Index (100 at ${price})` } : titles;
   });
 
   constructor() {
@@ -109,15 +120,37 @@ export class FitComparisonPage {
     ]);
   }
 
-  private curveLabel(fit: FitResource): string {
-    const n = fit.result?.n ?? 0;
-    return `${this.methodLabels[fit.spec.method].split(' (')[0]}, n = ${n}`;
+  protected chooseReference(value: number | string | null): void {
+    this.referenceChoice.set(value === '' || value === null ? null : Number(value));
   }
 
-  private defaultReference(): number {
-    const study = this.state.study();
+  /** The prices of the compared fits' own schedules: the grid an index price is picked from. */
+  private gridPrices(): number[] {
+    return this.chosenFits().flatMap((fit) => {
+      const grid = fit.spec.priceGrid;
+      return evenPrices(grid.from, grid.to, grid.steps);
+    });
+  }
+
+  /**
+   * Method and n name a curve; where two chosen fits would share that name, what sets each
+   * apart is added, or the legend would show two identical entries.
+   */
+  private curveLabels(fits: readonly FitResource[]): Map<string, string> {
+    const base = (fit: FitResource) =>
+      `${this.methodLabels[fit.spec.method].split(' (')[0]}, n = ${fit.result?.n ?? 0}`;
+    const details = fitDistinctions(fits, this.state.format());
+    return new Map(
+      fits.map((fit) => {
+        const twins = fits.filter((other) => base(other) === base(fit)).length > 1;
+        return [fit.id, twins ? `${base(fit)} (${details.get(fit.id)})` : base(fit)];
+      }),
+    );
+  }
+
+  private setupMiddle(): number {
     const setup = this.state.setup();
-    if (!setup || !study) return 1;
+    if (!setup) return 1;
     const middle = ((setup.gridFrom ?? 0) + (setup.gridTo ?? 0)) / 2;
     return Math.round(middle * 100) / 100;
   }

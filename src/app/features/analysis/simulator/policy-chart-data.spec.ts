@@ -38,8 +38,9 @@ describe('policy chart data', () => {
   });
 
   it('puts both curves quantity across and price up, with labelled areas and prices', () => {
-    const data = policyChartData(demand, supply, result, 'unit-tax');
+    const data = policyChartData(demand, supply, result, 'unit-tax', 0.95);
     expect(data.datasets.map((d) => d.label)).toEqual([
+      'Demand: 95 % band',
       'Deadweight loss',
       'Tax revenue',
       'Demand (estimate)',
@@ -48,17 +49,27 @@ describe('policy chart data', () => {
       'Seller price',
       'Market today',
     ]);
-    const demandLine = data.datasets[2].data;
+    const demandLine = data.datasets[3].data;
     for (const point of demandLine) close(point.x, 100 - 2 * point.y);
-    const supplyLine = data.datasets[3].data;
+    const supplyLine = data.datasets[4].data;
     for (const point of supplyLine) close(point.x, 3 * point.y);
     expect(data.datasets[0].fill).toBe('shape');
+    expect(data.datasets[1].fill).toBe('shape');
   });
 
   it('names the wedge a subsidy cost for a subsidy', () => {
     const subsidy = policyIncidence(demand, supply, { kind: 'unit-subsidy', amount: 5 });
-    expect(policyChartData(demand, supply, subsidy, 'unit-subsidy').datasets[1].label).toBe(
+    expect(policyChartData(demand, supply, subsidy, 'unit-subsidy', 0.95).datasets[2].label).toBe(
       'Subsidy cost',
     );
+  });
+
+  it('says the demand line is only the central estimate when the fit gives no band', () => {
+    const unbanded = { ...demand, quantityInterval: undefined };
+    const labels = policyChartData(unbanded, supply, result, 'unit-tax', 0.95).datasets.map(
+      (d) => d.label,
+    );
+    expect(labels).not.toContain('Demand: 95 % band');
+    expect(labels).toContain('Demand: central estimate (this fit gives no band)');
   });
 });

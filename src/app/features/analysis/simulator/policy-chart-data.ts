@@ -1,9 +1,11 @@
 import type { ChartData } from 'chart.js';
 import type { DemandCurve } from '@shared/estimation/welfare/demand-curve';
+import type { FittedDemandCurve } from '@shared/estimation/demand-schedule/fitted-demand-curve';
 import type { PolicyIncidence } from '@shared/estimation/welfare/policy-incidence';
 import type { SupplyCurve } from '@shared/estimation/welfare/supply-curve';
 import { chartColours, withAlpha } from '../charts/chart-palette';
 import type { LineDataset, XY } from '../charts/demand-chart-data';
+import { demandBandDatasets, demandLineLabel } from './demand-band';
 import type { PolicyKind } from './policy-simulation';
 
 const wedgeLabels: Record<PolicyKind, string> = {
@@ -89,19 +91,23 @@ const line = (label: string, data: XY[], colour: string, dash?: number[]): LineD
 });
 
 /**
- * The supply-and-demand chart of a policy: both curves, the old market point, the buyer and
- * seller prices, the wedge (revenue or spending) and the deadweight loss shaded.
+ * The supply-and-demand chart of a policy: both curves (demand with its band where the fit has
+ * one), the old market point, the buyer and seller prices, the wedge (revenue or spending) and
+ * the deadweight loss shaded.
  */
 export function policyChartData(
-  demand: DemandCurve,
+  demand: FittedDemandCurve,
   supply: SupplyCurve,
   result: PolicyIncidence,
   kind: PolicyKind,
+  confidenceLevel: number,
 ): ChartData<'line', XY[]> {
   const span = policyPriceSpan(result);
   const prices = pricesBetween(span.min, span.max, 80);
   const q1 = result.quantity;
+  const band = demandBandDatasets(demand, prices, confidenceLevel);
   const datasets: LineDataset[] = [
+    ...band,
     area(
       'Deadweight loss',
       deadweightLossPolygon(demand, supply, result),
@@ -110,7 +116,7 @@ export function policyChartData(
     ),
     area(wedgeLabels[kind], wedgeRectangle(result), chartColours.amber, 0.22),
     line(
-      'Demand (estimate)',
+      demandLineLabel(band.length > 0),
       quantityPricePoints((p) => demand.quantity(p), prices),
       chartColours.ink,
     ),

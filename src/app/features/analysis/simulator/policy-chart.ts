@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import type { ChartOptions } from 'chart.js';
-import type { DemandCurve } from '@shared/estimation/welfare/demand-curve';
+import type { FittedDemandCurve } from '@shared/estimation/demand-schedule/fitted-demand-curve';
 import type { PolicyIncidence } from '@shared/estimation/welfare/policy-incidence';
 import type { SupplyCurve } from '@shared/estimation/welfare/supply-curve';
 import { chartColours } from '../charts/chart-palette';
@@ -25,7 +25,8 @@ const font = { family: "'Fira Sans', system-ui, sans-serif", size: 13 };
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class PolicyChart {
-  readonly demand = input.required<DemandCurve>();
+  readonly demand = input.required<FittedDemandCurve>();
+  readonly confidenceLevel = input.required<number>();
   readonly supply = input.required<SupplyCurve>();
   readonly result = input.required<PolicyIncidence>();
   readonly kind = input.required<PolicyKind>();
@@ -33,7 +34,13 @@ export class PolicyChart {
   readonly quantityTitle = input.required<string>();
 
   protected readonly data = computed(() =>
-    policyChartData(this.demand(), this.supply(), this.result(), this.kind()),
+    policyChartData(
+      this.demand(),
+      this.supply(),
+      this.result(),
+      this.kind(),
+      this.confidenceLevel(),
+    ),
   );
   protected readonly options = computed((): ChartOptions<'line'> => {
     const axis = (text: string) => ({
@@ -59,10 +66,11 @@ export class PolicyChart {
   });
   protected readonly summary = computed(() => {
     const r = this.result();
+    const demandLine = this.data().datasets.find((d) => d.label?.startsWith('Demand'))?.label;
     return (
       `Supply and demand chart: the market moves from price ${r.before.price.toFixed(2)} to a ` +
       `buyer price of ${r.buyerPrice.toFixed(2)} and a seller price of ${r.sellerPrice.toFixed(2)}; ` +
-      `the shaded triangle is the deadweight loss.`
+      `the shaded triangle is the deadweight loss. ${demandLine ?? ''}.`
     );
   });
 }

@@ -27,6 +27,23 @@ const revenueLabels: Record<PolicyKind, string> = {
 };
 
 /**
+ * How each side's share of the wedge is named. A tax is a burden that buyers and sellers bear
+ * between them; a subsidy or a co-payment is a benefit, and the same share says how much of it
+ * reaches each side (a lower buyer price, a higher seller price).
+ */
+const incidenceLabels: Record<PolicyKind, { buyers: string; sellers: string }> = {
+  'unit-tax': { buyers: 'Borne by buyers', sellers: 'Borne by sellers' },
+  'unit-subsidy': {
+    buyers: 'Buyers’ share of the subsidy’s benefit',
+    sellers: 'Sellers’ share of the subsidy’s benefit',
+  },
+  'co-payment': {
+    buyers: 'Buyers’ share of the co-payment’s benefit',
+    sellers: 'Sellers’ share of the co-payment’s benefit',
+  },
+};
+
+/**
  * The simulator's figures in reading order with their labels; spending under a subsidy or a
  * co-payment is shown as a positive cost rather than a negative revenue.
  */
@@ -65,8 +82,18 @@ export function policyFigureLines(
       unit: 'price',
       figure: spending ? negated(figures.governmentRevenue) : figures.governmentRevenue,
     },
-    { key: 'buyerShare', label: 'Borne by buyers', unit: 'share', figure: figures.buyerShare },
-    { key: 'sellerShare', label: 'Borne by sellers', unit: 'share', figure: figures.sellerShare },
+    {
+      key: 'buyerShare',
+      label: incidenceLabels[kind].buyers,
+      unit: 'share',
+      figure: figures.buyerShare,
+    },
+    {
+      key: 'sellerShare',
+      label: incidenceLabels[kind].sellers,
+      unit: 'share',
+      figure: figures.sellerShare,
+    },
     {
       key: 'deadweightLoss',
       label: `Deadweight loss${perBuyer}`,

@@ -11,7 +11,7 @@ const near = (actual: number, expected: number, tolerance = 1e-8) =>
 const tax: PolicyInputs = {
   kind: 'unit-tax',
   amount: 5,
-  buyerShare: 0.5,
+  buyerPercent: 50,
   supplyElasticity: 1,
   marketPrice: 20,
 };
@@ -70,7 +70,7 @@ describe('simulatePolicy', () => {
   });
 
   it('solves a co-payment where buyers pay half the seller’s price', () => {
-    const result = simulatePolicy(ensemble, { ...tax, kind: 'co-payment', buyerShare: 0.5 });
+    const result = simulatePolicy(ensemble, { ...tax, kind: 'co-payment', buyerPercent: 50 });
     if (!result.ok) throw new Error(result.message);
     // 100 − 2·(ps/2) = 3ps gives ps = 25, pb = 12.5, Q = 75 (computed here by hand).
     near(result.figures.sellerPrice.estimate, 25);
@@ -78,14 +78,32 @@ describe('simulatePolicy', () => {
     near(result.figures.quantity.estimate, 75);
   });
 
+  it('takes the co-payment share in percent: 40 means buyers pay 40 % of the seller’s price', () => {
+    const result = simulatePolicy(ensemble, { ...tax, kind: 'co-payment', buyerPercent: 40 });
+    if (!result.ok) throw new Error(result.message);
+    // 100 − 2·(0.4·ps) = 3ps gives ps = 100/3.8, pb = 0.4·ps (computed here by hand).
+    near(result.figures.sellerPrice.estimate, 100 / 3.8);
+    near(result.figures.buyerPrice.estimate, 40 / 3.8);
+  });
+
+  it('asks for the co-payment share in percent when it is out of range', () => {
+    for (const buyerPercent of [0, 100, 140, Number.NaN]) {
+      expect(simulatePolicy(ensemble, { ...tax, kind: 'co-payment', buyerPercent })).toEqual({
+        ok: false,
+        field: 'buyerPercent',
+        message: 'Enter the buyer’s share in percent, above 0 and below 100 (say 40).',
+      });
+    }
+  });
+
   it('names the input at fault instead of computing with it', () => {
     expect(simulatePolicy(ensemble, { ...tax, amount: 0 })).toMatchObject({
       ok: false,
       field: 'amount',
     });
-    expect(simulatePolicy(ensemble, { ...tax, kind: 'co-payment', buyerShare: 1.2 })).toMatchObject(
-      { ok: false, field: 'buyerShare' },
-    );
+    expect(
+      simulatePolicy(ensemble, { ...tax, kind: 'co-payment', buyerPercent: 120 }),
+    ).toMatchObject({ ok: false, field: 'buyerPercent' });
     expect(simulatePolicy(ensemble, { ...tax, supplyElasticity: -1 })).toMatchObject({
       ok: false,
       field: 'supplyElasticity',

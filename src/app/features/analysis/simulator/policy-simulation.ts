@@ -23,8 +23,11 @@ export interface PolicyInputs {
   readonly kind: PolicyKind;
   /** Per-unit tax or subsidy, in the study's currency. */
   readonly amount: number;
-  /** Share of the seller's price the buyer still pays under a co-payment, in (0, 1). */
-  readonly buyerShare: number;
+  /**
+   * Percentage of the seller's price the buyer still pays under a co-payment, in (0, 100): shares
+   * are typed in percent everywhere in the app; the engine's fraction is made here.
+   */
+  readonly buyerPercent: number;
   /** Price elasticity of supply, > 0. */
   readonly supplyElasticity: number;
   /** Today's market price: the supply curve passes through the demand curve here. */
@@ -58,13 +61,13 @@ export function pricePolicyOf(
   inputs: PolicyInputs,
 ): PricePolicy | { field: string; message: string } {
   if (inputs.kind === 'co-payment') {
-    if (!(inputs.buyerShare > 0 && inputs.buyerShare < 1)) {
+    if (!(inputs.buyerPercent > 0 && inputs.buyerPercent < 100)) {
       return {
-        field: 'buyerShare',
-        message: 'The buyer’s share must lie between 0 and 1 (say 0.4).',
+        field: 'buyerPercent',
+        message: 'Enter the buyer’s share in percent, above 0 and below 100 (say 40).',
       };
     }
-    return { kind: 'co-payment', buyerShare: inputs.buyerShare };
+    return { kind: 'co-payment', buyerShare: inputs.buyerPercent / 100 };
   }
   if (!(Number.isFinite(inputs.amount) && inputs.amount > 0)) {
     const what = inputs.kind === 'unit-tax' ? 'tax' : 'subsidy';

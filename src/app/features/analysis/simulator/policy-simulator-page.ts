@@ -48,7 +48,7 @@ export class PolicySimulatorPage {
 
   protected readonly kind = signal<PolicyKind>('unit-tax');
   protected readonly amount = signal<number | null>(null);
-  protected readonly buyerShare = signal<number | null>(0.5);
+  protected readonly buyerPercent = signal<number | null>(50);
   protected readonly supplyElasticity = signal<number | null>(1);
   protected readonly marketPrice = linkedSignal<number | null>(() => {
     const range = this.result()?.curve?.observedPriceRange;
@@ -72,7 +72,7 @@ export class PolicySimulatorPage {
     const inputs: PolicyInputs = {
       kind: this.kind(),
       amount: this.amountShown(),
-      buyerShare: this.buyerShare() ?? Number.NaN,
+      buyerPercent: this.buyerPercent() ?? Number.NaN,
       supplyElasticity: this.supplyElasticity() ?? Number.NaN,
       marketPrice: this.marketPrice() ?? Number.NaN,
     };
@@ -93,13 +93,13 @@ export class PolicySimulatorPage {
   }
 
   protected setNumber(
-    target: 'amount' | 'buyerShare' | 'supplyElasticity' | 'marketPrice',
+    target: 'amount' | 'buyerPercent' | 'supplyElasticity' | 'marketPrice',
     value: number | string | null,
   ): void {
     const parsed = value === '' || value === null ? null : Number(value);
     const signals = {
       amount: this.amount,
-      buyerShare: this.buyerShare,
+      buyerPercent: this.buyerPercent,
       supplyElasticity: this.supplyElasticity,
       marketPrice: this.marketPrice,
     };
