@@ -7,6 +7,12 @@ import type { FitSchedule } from '@shared/analysis/fit-result';
 import type { PriceGridSpec } from '@shared/analysis/fit-spec';
 import { buildDemandSchedule } from '@shared/estimation/demand-schedule/demand-schedule';
 import type { FittedDemandCurve } from '@shared/estimation/demand-schedule/fitted-demand-curve';
+import { countOf, priceWriter } from './price-text';
+
+const bandFloor = {
+  quantity: 'a band is cut at zero: quantities cannot be negative',
+  share: 'a band is cut at zero: shares cannot be negative',
+} as const;
 
 export interface ScheduleOutcome {
   readonly schedule: FitSchedule;
@@ -37,14 +43,14 @@ export function fitSchedule(
   const outside = rows.filter((row) => row.extrapolated).map((row) => row.price);
   if (outside.length > 0) {
     warnings.push(
-      `${outside.length} grid price(s) lie outside the observed prices ` +
+      `${countOf(outside.length, 'grid price')} ${outside.length === 1 ? 'lies' : 'lie'} outside the observed prices ` +
         `${money(built.observedPriceRange.min)}–${money(built.observedPriceRange.max)} and are extrapolation: ${list(outside)}`,
     );
   }
   const thin = rows.filter((row) => row.respondents < minimumCellRespondents);
   if (thin.length > 0) {
     warnings.push(
-      `${thin.length} grid price(s) rest on fewer than ${minimumCellRespondents} respondents and ` +
+      `${countOf(thin.length, 'grid price')} ${thin.length === 1 ? 'rests' : 'rest'} on fewer than ${minimumCellRespondents} respondents and ` +
         `cannot be published: ${list(thin.map((row) => row.price))}`,
     );
   }
@@ -55,25 +61,10 @@ export function fitSchedule(
       confidenceLevel: built.confidenceLevel,
       observedPriceRange: built.observedPriceRange,
       rows,
-      assumptions: [...built.assumptions, 'a band is cut at zero: quantities cannot be negative'],
+      assumptions: [...built.assumptions, bandFloor[built.quantityKind]],
     },
     warnings,
   };
-}
-
-/**
- * Prices as the warnings name them: with the study's currency code, grouped, to at most two
- * decimals ("KES 3,650"), as a researcher reads them anywhere.
- */
-function priceWriter(currency: string): (price: number) => string {
-  const format = new Intl.NumberFormat('en', {
-    style: 'currency',
-    currency,
-    currencyDisplay: 'code',
-    maximumFractionDigits: 2,
-    trailingZeroDisplay: 'stripIfInteger',
-  } as Intl.NumberFormatOptions);
-  return (price) => format.format(price);
 }
 
 /** A band that never goes below zero and always contains the prediction (a clipped linear curve). */

@@ -84,7 +84,7 @@ export function openApiDocument(appUrl: string) {
         get: {
           operationId: 'getScheduleCsv',
           summary:
-            'One published schedule version as CSV (first line: a comment saying the figures are estimates)',
+            'One published schedule version as CSV (header row first; a final Note column says the figures are estimates)',
           parameters: [versionId],
           responses: {
             '200': {

@@ -4,6 +4,7 @@ import type { ScheduleVersion } from '@shared/analysis/schedule-version';
 import type { AppDependencies } from '../app-dependencies';
 import { studyMembers, users } from '../db/schema';
 import { schedulePublishedMail } from './schedule-published-mail';
+import { findVersion } from './schedule-versions-repository';
 
 /**
  * E-mails every client member of the study about a new version. A mail that fails is logged,
@@ -21,8 +22,13 @@ export async function notifyClients(
       and(eq(studyMembers.studyId, version.studyId), sql`'client' = any(${studyMembers.roles})`),
     );
   const link = `${deps.config.APP_URL}${portalSchedulePath(version.studyId, version.id)}`;
+  const replacedVersion = version.replacesId
+    ? (await findVersion(deps.db, version.studyId, version.replacesId)).version
+    : null;
   const sent = await Promise.allSettled(
-    clients.map((to) => deps.mailer.send(schedulePublishedMail({ to, version, link }))),
+    clients.map((to) =>
+      deps.mailer.send(schedulePublishedMail({ to, version, replacedVersion, link })),
+    ),
   );
   sent.forEach((outcome, i) => {
     if (outcome.status === 'rejected')

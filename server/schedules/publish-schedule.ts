@@ -5,12 +5,16 @@ import type { Database } from '../db/database';
 import { scheduleVersions, studies } from '../db/schema';
 import { findFit } from '../fits/fits-repository';
 import { HttpError, notFound } from '../http/http-error';
+import { countOf, priceWriter } from '../analysis/price-text';
 import type { PublishedSchedule } from './published-schedule';
+import { refuseRepublishing } from './refuse-republishing';
 
 /**
  * Publishes a finished fit's schedule as the study's next version. Refuses a fit that is not
- * done or has no schedule (409), a schedule with a cell resting on fewer than five respondents
- * (422, naming the cells), and a `replaces` that is not this study's or is already replaced.
+ * done or has no schedule (409), a fit already published in a version still in force, or a title
+ * a version in force already has without saying it replaces that version (409), a schedule with
+ * a cell resting on fewer than five respondents (422, naming the cells), and a `replaces` that is
+ * not this study's or is already replaced.
  */
 export async function publishSchedule(
   db: Database,
@@ -34,7 +38,7 @@ export async function publishSchedule(
       `That fit has no demand schedule: ${result.noScheduleReason ?? 'no curve'}.`,
     );
   }
-  refuseThinCells(result.schedule.rows);
+  refuseThinCells(result.schedule.rows, result.currency);
   return db.transaction(async (tx) => {
     const [study] = await tx
       .select({ name: studies.name, productName: studies.productName })
@@ -42,6 +46,7 @@ export async function publishSchedule(
       .where(eq(studies.id, studyId))
       .for('update');
     if (request.replaces) await checkReplaceable(tx, studyId, request.replaces);
+    await refuseRepublishing(tx, studyId, fit.id, request);
     const [{ latest }] = await tx
       .select({ latest: max(scheduleVersions.version) })
       .from(scheduleVersions)
@@ -75,17 +80,22 @@ export async function publishSchedule(
   });
 }
 
-function refuseThinCells(rows: readonly { price: number; respondents: number }[]): void {
+function refuseThinCells(
+  rows: readonly { price: number; respondents: number }[],
+  currency: string,
+): void {
   const thin = cellsBelowMinimum(rows);
   if (thin.length === 0) return;
+  const money = priceWriter(currency);
   throw new HttpError(
     422,
     'too-few-respondents',
-    `${thin.length} cell(s) of the schedule rest on fewer than ${minimumCellRespondents} respondents; ` +
-      'narrow the price grid to where the answers are, or collect more interviews.',
+    `${countOf(thin.length, 'price')} of the schedule ${thin.length === 1 ? 'rests' : 'rest'} on ` +
+      `fewer than ${minimumCellRespondents} respondents; narrow the price grid to where the ` +
+      'answers are, or collect more interviews.',
     thin.map((row) => ({
       path: `price:${row.price}`,
-      message: `At ${row.price} the schedule rests on ${row.respondents} respondent(s); at least ${minimumCellRespondents} are needed`,
+      message: `At ${money(row.price)} the schedule rests on ${countOf(row.respondents, 'respondent')}; at least ${minimumCellRespondents} are needed.`,
     })),
   );
 }

@@ -2,16 +2,25 @@ import { analysisMethodLabels } from '@shared/analysis/analysis-method';
 import { estimateCaution, type ScheduleVersion } from '@shared/analysis/schedule-version';
 import type { OutgoingMail } from '../mail/mailer';
 
-/** The e-mail a client of the study gets when a schedule version is published. */
+/**
+ * The e-mail a client of the study gets when a schedule version is published. Version numbers
+ * run through the whole study, so the mail says which version a correction replaces, and that
+ * a version replacing none starts a schedule of its own.
+ */
 export function schedulePublishedMail(options: {
   to: { email: string; name: string };
   version: ScheduleVersion;
+  /** The number of the version this one replaces, when it replaces one. */
+  replacedVersion: number | null;
   link: string;
 }): OutgoingMail {
-  const { version } = options;
-  const correction = version.replacesId
-    ? 'It corrects an earlier version, which stays available for reference.'
-    : 'It is the first version of this schedule.';
+  const { version, replacedVersion } = options;
+  const correction =
+    replacedVersion !== null
+      ? `It replaces version ${replacedVersion}, which stays available for reference.`
+      : version.version === 1
+        ? 'It is the first version of this schedule.'
+        : 'It starts a new schedule for this study; the schedules published before stay as they were.';
   return {
     to: options.to.email,
     subject: `New demand schedule for "${version.studyName}": ${version.title} (version ${version.version})`,

@@ -69,7 +69,9 @@ function withInterval(
   const drawn = ensemble.requested;
   if (drawn === 0) return { estimate, low: null, high: null, note: 'this model gives no interval' };
   if (values.length < minimumUsableShare * drawn) {
-    const note = `too few simulated curves (${values.length} of ${drawn}) give a value`;
+    const note =
+      `too few simulated curves give a value (${values.length} of ${drawn}; ` +
+      `${Math.round(minimumUsableShare * 100)} % are needed), so no interval is shown`;
     return { estimate, low: null, high: null, note };
   }
   values.sort((a, b) => a - b);

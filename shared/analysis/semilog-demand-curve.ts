@@ -2,6 +2,7 @@ import type { FittedDemandCurve } from '../estimation/demand-schedule/fitted-dem
 import { normalQuantile } from '../estimation/distributions/normal';
 import { tQuantile } from '../estimation/distributions/student-t';
 import { quadraticForm } from '../estimation/maximum-likelihood/small-matrix';
+import { formulaNumber, formulaTerm } from '../estimation/formula-number';
 
 /** The coefficients of ln q = a + b·p with their covariance and where they were fitted. */
 export interface SemiLogRegression {
@@ -24,7 +25,7 @@ export function semiLogRegressionDemand(fit: SemiLogRegression): FittedDemandCur
       ? normalQuantile(1 - (1 - level) / 2)
       : tQuantile(1 - (1 - level) / 2, fit.dfResidual);
   return {
-    description: `Q = exp(${a} + ${b}·P)`,
+    description: `Q = exp(${formulaNumber(a)} ${formulaTerm(b)}·P)`,
     method: 'semi-log demand regression',
     quantityKind: 'quantity',
     quantity: (p) => Math.exp(a + b * p),

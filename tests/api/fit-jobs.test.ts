@@ -229,7 +229,7 @@ describe('fits the data refuses', () => {
     // Prices are named in the study's currency (a no-break space keeps code and amount together).
     const kes = (amount: string) => `KES\u00a0${amount}`;
     expect(result.warnings).toContain(
-      `5 grid price(s) lie outside the observed prices ${kes('800')}–${kes('2,600')} and are ` +
+      `5 grid prices lie outside the observed prices ${kes('800')}–${kes('2,600')} and are ` +
         `extrapolation: ${['400', '2,800', '3,200', '3,600', '4,000'].map(kes).join(', ')}`,
     );
   });

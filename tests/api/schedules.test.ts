@@ -9,11 +9,13 @@ import { loadFitInput } from '../../server/analysis/load-fit-input';
 import { runFit } from '../../server/analysis/run-fit';
 import { fits, scheduleVersions } from '../../server/db/schema';
 import { stopFitSenders } from '../../server/fits/fit-sender';
+import { reportMoney } from '../../server/schedules/downloads/report-money';
 import { reportNumber } from '../../server/schedules/downloads/report-number';
+import { scheduleCells, scheduleColumns } from '../../server/schedules/downloads/schedule-table';
 import { insertLanternData } from '../support/analysis-study';
 import { commonSpec, shelfLogLog } from '../support/fit-specs';
-import { firstLink, waitForMessageTo } from '../support/mail-sink-client';
-import { binaryParser, csvRows, pdfText, xlsxRows } from '../support/parse-downloads';
+import { firstLink, sinkMessages, waitForMessageTo } from '../support/mail-sink-client';
+import { binaryParser, pdfText, xlsxRows } from '../support/parse-downloads';
 import { signedInAgent, type SignedInAgent } from '../support/signed-in-agent';
 import { insertPerson, insertStudy } from '../support/study-rows';
 import { createTestApp } from '../support/test-app';
@@ -137,6 +139,9 @@ describe('publishing', () => {
     expect(response.body).toMatchObject({ version: 2, replacesId: first.id });
     const old = await as.client.get(`/api/studies/${studyId}/schedules/${first.id}`);
     expect(old.body).toMatchObject({ version: 1, replacedById: response.body.id });
+    const mail = await mailWithSubject(organisation.people.client.email, '(version 2)');
+    expect(mail.text).toContain('It replaces version 1, which stays available for reference.');
+    expect(mail.text).not.toContain('first version');
     const twice = await publish(studyId, { fitId: corrected, title: 'Again', replaces: first.id });
     expect(twice.status).toBe(409);
     expect(twice.body.error.code).toBe('already-replaced');
@@ -146,6 +151,39 @@ describe('publishing', () => {
       replaces: (await otherVersion()).id,
     });
     expect(foreign.status).toBe(404);
+  });
+
+  it('refuses to publish a fit that a version in force already has, and says which', async () => {
+    const fitId = await finishedFit(studyId, { ...ladder, confidenceLevel: 0.9 });
+    const once = await publish(studyId, { fitId, title: 'Lantern share, 90 % bands' });
+    expect(once.status).toBe(201);
+    const before = await versionCount(studyId);
+    const again = await publish(studyId, { fitId, title: 'Lantern share, 90 % bands' });
+    expect(again.status).toBe(409);
+    expect(again.body.error.code).toBe('already-published');
+    expect(again.body.error.message).toContain(`already published as version ${once.body.version}`);
+    const renamed = await publish(studyId, { fitId, title: 'Another title' });
+    expect(renamed.body.error.code).toBe('already-published');
+    expect(await versionCount(studyId)).toBe(before);
+  });
+
+  it('refuses a second schedule in force under the title of another', async () => {
+    const fitId = await finishedFit(studyId, { ...ladder, confidenceLevel: 0.8 });
+    const before = await versionCount(studyId);
+    const response = await publish(studyId, { fitId, title: 'lantern share, 90 % bands' });
+    expect(response.status).toBe(409);
+    expect(response.body.error.code).toBe('title-in-use');
+    expect(response.body.error.message).toMatch(/Choose it under Replaces/);
+    expect(await versionCount(studyId)).toBe(before);
+  });
+
+  it('answers an empty title with the field’s own message, once', async () => {
+    const response = await publish(studyId, { fitId: firstFit, title: '  ' });
+    expect(response.status).toBe(400);
+    expect(response.body.error.message).toBe('Give the schedule a title.');
+    expect(response.body.error.issues).toEqual([
+      { path: 'title', message: 'Give the schedule a title' },
+    ]);
   });
 
   it('refuses a schedule whose cells rest on fewer than five respondents, naming them', async () => {
@@ -160,7 +198,10 @@ describe('publishing', () => {
     const issues = response.body.error.issues as { path: string; message: string }[];
     expect(issues.length).toBeGreaterThan(0);
     expect(issues[0].path).toBe('price:200');
-    expect(issues[0].message).toMatch(/rests on \d respondent/);
+    expect(issues[0].message).toMatch(
+      /^At [A-Z]{3}\s200 the schedule rests on (1 respondent|\d respondents); at least 5 are needed\.$/,
+    );
+    expect(response.body.error.message).not.toContain('(s)');
     expect(await versionCount(studyId)).toBe(before);
   });
 
@@ -179,6 +220,18 @@ describe('publishing', () => {
     expect(response.body.error.code).toBe('fit-not-done');
   });
 });
+
+/** The newest message to an address whose subject contains some text (delivery is asynchronous). */
+async function mailWithSubject(address: string, subject: string) {
+  for (let i = 0; i < 50; i++) {
+    const found = (await sinkMessages()).find(
+      (m) => m.to.includes(address) && m.subject.includes(subject),
+    );
+    if (found) return found;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`No message "${subject}" to ${address}`);
+}
 
 async function versionCount(study: string): Promise<number> {
   const [row] = await deps.db
@@ -258,43 +311,18 @@ describe('downloads, parsed back', () => {
       .buffer(true)
       .parse(binaryParser);
 
-  it('gives a CSV whose comment line says it is an estimate and whose numbers are the engine’s', async () => {
+  it('gives a CSV that starts with its header, with the engine’s numbers rounded and the note last', async () => {
     const response = await download('csv');
     expect(response.headers['content-type']).toMatch(/text\/csv/);
-    const { comment, header, rows } = csvRows((response.body as Buffer).toString('utf8'));
-    expect(comment).toMatch(/^# Estimate: /);
-    expect(header).toEqual([
-      'price',
-      'quantity',
-      'ci_low',
-      'ci_high',
-      'revenue',
-      'elasticity',
-      'extrapolated',
-      'respondents',
-    ]);
-    expect(
-      rows.map((r) => [
-        Number(r[0]),
-        Number(r[1]),
-        Number(r[2]),
-        Number(r[3]),
-        Number(r[4]),
-        Number(r[5]),
-        r[6],
-        Number(r[7]),
-      ]),
-    ).toEqual(
-      engineRows.map((r) => [
-        r.price,
-        r.quantity,
-        r.ciLow,
-        r.ciHigh,
-        r.revenue,
-        r.elasticity,
-        String(r.extrapolated),
-        r.respondents,
-      ]),
+    expect(response.headers['content-disposition']).toContain(`-v${version.version}-estimate.csv`);
+    const text = (response.body as Buffer).toString('utf8');
+    const lines = text.trim().split('\r\n');
+    expect(lines[0]).toBe([...scheduleColumns(version), 'Note'].join(','));
+    const rounded = scheduleCells({ ...version, rows: engineRows });
+    const cells = lines.slice(1).map((line) => line.split(',').slice(0, 8));
+    expect(cells).toEqual(rounded.map((row) => row.map((c) => (c === null ? '' : String(c)))));
+    expect(lines[1]).toMatch(
+      /,"Estimate: demand schedule “Shelf demand for download”, version \d+,/,
     );
   });
 
@@ -302,6 +330,7 @@ describe('downloads, parsed back', () => {
     const response = await download('xlsx');
     const rows = await xlsxRows(response.body as Buffer, 'Schedule');
     expect(String(rows[0][0])).toMatch(/^Estimate: /);
+    expect(rows[1]).toEqual(scheduleColumns(version));
     expect(rows.slice(2)).toEqual(
       engineRows.map((r) => [
         r.price,
@@ -310,12 +339,17 @@ describe('downloads, parsed back', () => {
         r.ciHigh,
         r.revenue,
         r.elasticity,
-        r.extrapolated,
+        r.extrapolated ? 'yes' : 'no',
         r.respondents,
       ]),
     );
     const about = await xlsxRows(response.body as Buffer, 'About');
     expect(about).toContainEqual(['Data hash (SHA-256)', version.dataHash]);
+    expect(about).toContainEqual(['Confidence level', '95 %']);
+    expect(about).toContainEqual(['Specification: demand form', 'Log-log (constant elasticity)']);
+    expect(JSON.stringify(about)).not.toContain('{\\"method');
+    const published = about.find((row) => row[0] === 'Published');
+    expect(String(published?.[1])).toMatch(/^\d{1,2} \w+ \d{4} at \d{2}:\d{2} UTC by /);
   });
 
   it('gives a PDF report with the method, n, intervals, data hash, caution and the engine’s numbers', async () => {
@@ -329,9 +363,13 @@ describe('downloads, parsed back', () => {
     expect(text).toContain(version.dataHash);
     expect(text).toContain('Estimates, not advice');
     expect(text).toContain('essential goods');
+    expect(text).toContain('95 % interval low');
+    expect(text).toContain('95 % interval high');
+    expect(text).toContain('Specification');
+    const money = reportMoney(version.currency);
     for (const r of engineRows) {
       expect(text).toContain(
-        `${reportNumber(r.price)} ${reportNumber(r.quantity)} ${reportNumber(r.ciLow)} ${reportNumber(r.ciHigh)}`,
+        `${money(r.price)} ${reportNumber(r.quantity)} ${reportNumber(r.ciLow)} ${reportNumber(r.ciHigh)} ${money(r.revenue)}`,
       );
     }
   });

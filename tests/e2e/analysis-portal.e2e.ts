@@ -129,7 +129,7 @@ describe('the researcher’s analysis workspace', () => {
       (n) => n === 2,
       10_000,
     );
-    await page.locator('app-demand-chart canvas').waitFor();
+    await page.locator('app-comparison-chart canvas').waitFor();
     await page.waitForTimeout(500);
     await screenshot(page, 'analysis-compare-1280');
   });
@@ -158,7 +158,7 @@ describe('the researcher’s analysis workspace', () => {
     await tab('Publish').click();
     await page.getByLabel('Title').fill('Solar lantern demand, November round');
     await page.getByRole('button', { name: 'Publish to clients' }).click();
-    await page.getByText(/Version \d+ published; \d+ client\(s\) told by e-mail/).waitFor();
+    await page.getByText(/Version \d+ published; \d+ clients? told by e-mail/).waitFor();
     await page
       .getByRole('list', { name: 'Published versions' })
       .getByText('current')

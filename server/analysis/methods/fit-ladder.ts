@@ -11,6 +11,7 @@ import { analysePriceLadder } from '@shared/estimation/price-ladder/price-ladder
 import type { AnalysisDataset } from '../analysis-dataset';
 import { weightOf, type RespondentWeights } from '../respondent-weights';
 import { coefficientFrom, figure, type MethodFit } from './method-fit';
+import { regressionTermLabel } from './coefficient-labels';
 
 /**
  * Gabor–Granger: the engine's ladder analysis (monotone answers, weighted shares, logistic
@@ -56,7 +57,9 @@ export function fitLadder(
   return {
     n: result.n,
     observations: result.answers,
-    coefficients: logistic.coefficients.map((c) => coefficientFrom(c.term, c)),
+    coefficients: logistic.coefficients.map((c) =>
+      coefficientFrom(regressionTermLabel(c.term, []), c),
+    ),
     fitStatistics: [
       { label: 'Respondents', value: result.n },
       { label: 'Answers', value: result.answers },

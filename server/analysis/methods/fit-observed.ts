@@ -5,10 +5,12 @@ import { fitDemandModel } from '@shared/estimation/least-squares/fit-demand-mode
 import { INTERCEPT_TERM } from '@shared/estimation/least-squares/weighted-design';
 import type { AnalysisDataset } from '../analysis-dataset';
 import type { RespondentWeights } from '../respondent-weights';
+import { regressionTermLabel } from './coefficient-labels';
 import { curveAtMeans } from './curve-at-means';
 import { figure, rangeOf, type MethodFit } from './method-fit';
 import { observedModelSpec } from './observed-model-spec';
 import { optimalPriceFigures } from './optimal-price-figures';
+import { weakInstrumentWarnings } from './weak-instrument';
 
 /** Residuals beyond this many are not kept in the result (the plot would not show them anyway). */
 const maxResiduals = 2000;
@@ -35,7 +37,7 @@ export function fitObserved(
     n: new Set(rows.map((r) => r.interviewId)).size,
     observations: fit.n,
     coefficients: fit.coefficients.map(({ term, estimate, stdError, ciLow, ciHigh, pValue }) => ({
-      term,
+      term: regressionTermLabel(term, design.loggedColumns, design.fixedEffectBases),
       estimate,
       stdError,
       ciLow,
@@ -50,7 +52,7 @@ export function fitObserved(
     curve,
     noCurveReason: reason,
     evidence: rows.map((r) => ({ points: [r.price] })),
-    warnings: [],
+    warnings: weakInstrumentWarnings(fit),
     assumptions: [
       ...fit.assumptions,
       'the demand curve holds covariates and region effects at their (weighted) sample means',

@@ -13,6 +13,7 @@ import {
 import type { AnalysisDataset } from '../analysis-dataset';
 import { weightOf, type RespondentWeights } from '../respondent-weights';
 import { coefficientFrom, figure, type MethodFit } from './method-fit';
+import { wtpTermLabels } from './coefficient-labels';
 
 /** Payment cards by interval maximum likelihood (normal or logistic WTP). */
 export function fitPaymentCard(
@@ -96,7 +97,7 @@ function wtpModelFit(
   return {
     n,
     observations: n,
-    coefficients: result.coefficients.map((c) => coefficientFrom(c.term, c)),
+    coefficients: result.coefficients.map((c) => coefficientFrom(wtpTermLabels[c.term], c)),
     fitStatistics: [
       { label: 'Respondents', value: n },
       { label: 'Log-likelihood', value: result.logLikelihood },

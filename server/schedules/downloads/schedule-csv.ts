@@ -5,18 +5,19 @@ const cell = (value: TableCell) => {
   if (value === null) return '';
   if (typeof value === 'number') return String(value);
   const text = String(value);
-  return /[",\n\r#]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+  return /[",\n\r]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 };
 
 /**
- * The schedule as plain CSV: a first comment line (`# Estimate: …`) saying what the numbers
- * are, the header, then one row per grid price with numbers at full precision.
+ * The schedule as plain CSV that spreadsheets and data tools read without help: the header row
+ * first, one row per grid price with rounded values, and a last column "Note" whose first cell
+ * says the figures are estimates (a comment line above the header would be taken for data).
  */
 export function scheduleCsv(version: ScheduleVersion): string {
+  const note = estimateNote(version).replace(/[\r\n]+/g, ' ');
   const lines = [
-    `# ${estimateNote(version).replace(/[\r\n]+/g, ' ')}`,
-    scheduleColumns(version).join(','),
-    ...scheduleCells(version).map((row) => row.map(cell).join(',')),
+    [...scheduleColumns(version), 'Note'].map(cell).join(','),
+    ...scheduleCells(version).map((row, i) => [...row, i === 0 ? note : null].map(cell).join(',')),
   ];
   return `${lines.join('\r\n')}\r\n`;
 }

@@ -2,31 +2,65 @@ import type { ScheduleVersion } from '@shared/analysis/schedule-version';
 
 export type TableCell = number | string | boolean | null;
 
-/** The columns every download and the read API's CSV share, in this order. */
-export function scheduleColumns(version: Pick<ScheduleVersion, 'quantityKind'>): string[] {
-  const quantity = version.quantityKind === 'share' ? 'purchase_share' : 'quantity';
+type Columns = Pick<ScheduleVersion, 'quantityKind' | 'currency' | 'confidenceLevel'>;
+
+/** "95 %" for 0.95. */
+export const levelText = (confidenceLevel: number) =>
+  `${Math.round(confidenceLevel * 1000) / 10} %`;
+
+/** The schedule's column headers in words, with the currency and interval level they are in. */
+export function scheduleColumns(version: Columns): string[] {
+  const level = levelText(version.confidenceLevel);
+  const share = version.quantityKind === 'share';
   return [
-    'price',
-    quantity,
-    'ci_low',
-    'ci_high',
-    'revenue',
-    'elasticity',
-    'extrapolated',
-    'respondents',
+    `Price (${version.currency})`,
+    share ? 'Purchase share (estimate)' : 'Quantity (estimate)',
+    `${level} interval low`,
+    `${level} interval high`,
+    share ? `Revenue per potential buyer (${version.currency})` : `Revenue (${version.currency})`,
+    'Elasticity',
+    'Extrapolated',
+    'Respondents',
   ];
 }
 
-/** The schedule's rows as table cells, in `scheduleColumns` order. */
-export function scheduleCells(version: Pick<ScheduleVersion, 'rows'>): TableCell[][] {
+/** Digits after the point of the currency's minor unit (2 for KES, 0 for JPY). */
+export function minorDigits(currency: string): number {
+  return (
+    new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions()
+      .maximumFractionDigits ?? 2
+  );
+}
+
+const roundTo = (digits: number) => (value: number | null) =>
+  value === null ? null : Number(value.toFixed(digits));
+
+// Quantities span units to millions: four significant digits, never below whole units' worth.
+const roundQuantity = (value: number | null) =>
+  value === null
+    ? null
+    : Math.abs(value) >= 1000
+      ? Math.round(value)
+      : Number(value.toPrecision(4));
+
+/**
+ * The schedule's rows as table cells, in `scheduleColumns` order, rounded as a reader uses them:
+ * shares to 4 decimals, money to the currency's minor unit, elasticities to 3 decimals.
+ */
+export function scheduleCells(
+  version: Pick<ScheduleVersion, 'rows' | 'quantityKind' | 'currency'>,
+): TableCell[][] {
+  const money = roundTo(minorDigits(version.currency));
+  const amount = version.quantityKind === 'share' ? roundTo(4) : roundQuantity;
+  const elasticity = roundTo(3);
   return version.rows.map((r) => [
-    r.price,
-    r.quantity,
-    r.ciLow,
-    r.ciHigh,
-    r.revenue,
-    r.elasticity,
-    r.extrapolated,
+    money(r.price),
+    amount(r.quantity),
+    amount(r.ciLow),
+    amount(r.ciHigh),
+    money(r.revenue),
+    elasticity(r.elasticity),
+    r.extrapolated ? 'yes' : 'no',
     r.respondents,
   ]);
 }
@@ -34,8 +68,8 @@ export function scheduleCells(version: Pick<ScheduleVersion, 'rows'>): TableCell
 /** One line saying what the numbers are: estimates, from which method and sample. */
 export function estimateNote(version: ScheduleVersion): string {
   return (
-    `Estimate: demand schedule "${version.title}", version ${version.version}, study "${version.studyName}"; ` +
-    `${version.methodLabel}; n = ${version.n}; ${Math.round(version.confidenceLevel * 100)} % intervals; ` +
+    `Estimate: demand schedule “${version.title}”, version ${version.version}, study “${version.studyName}”; ` +
+    `${version.methodLabel}; n = ${version.n}; ${levelText(version.confidenceLevel)} intervals; ` +
     `prices in ${version.currency}; data hash ${version.dataHash}. Every figure is an estimate with ` +
     'uncertainty, not advice.'
   );
@@ -48,5 +82,5 @@ export function downloadName(version: ScheduleVersion, extension: string): strin
     .replace(/[^a-z0-9]+/g, '-')
     .replace(/^-|-$/g, '')
     .slice(0, 60);
-  return `${slug || 'schedule'}-v${version.version}.${extension}`;
+  return `${slug || 'schedule'}-v${version.version}-estimate.${extension}`;
 }

@@ -35,6 +35,17 @@ describe('analysePriceLadder monotone rule', () => {
     expect(result.steps.map((s) => s.share)).toEqual([1, 0.75, 0.25]);
   });
 
+  it('states the rule in plain words, not by its code', () => {
+    const text = (rule?: 'carry-yes-downward' | 'keep') =>
+      analysePriceLadder({ answers: base, monotoneRule: rule }).assumptions.join(' | ');
+    expect(text()).toContain(
+      'answers made consistent per respondent: a no at one price counts as a no at every higher price (a yes above a no is read as no)',
+    );
+    expect(text('carry-yes-downward')).toContain('a no below a yes is read as yes');
+    expect(text('keep')).toContain('answers used as given');
+    expect(text() + text('keep')).not.toMatch(/carry-|'keep'|monotone rule/);
+  });
+
   it('can keep answers as given', () => {
     const result = analysePriceLadder({ answers: base, monotoneRule: 'keep' });
     expect(result.nonMonotoneRespondents).toBe(1);

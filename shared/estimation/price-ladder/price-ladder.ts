@@ -123,12 +123,28 @@ function ladderAssumptions(
 ): string[] {
   return [
     calibration
-      ? `intent calibrated to purchase probability ${JSON.stringify(calibration)}`
-      : 'answers are 0/1 purchase decisions',
-    `monotone rule '${rule}' applied per respondent`,
+      ? `intent read as a purchase probability: ${calibrationText(calibration)}`
+      : 'answers are yes/no purchase decisions',
+    monotoneRuleText[rule],
     'grid maxima: ties go to the lowest price; their intervals, and those of the step shares and arc elasticities, from 1,000 respondent resamples (percentile bootstrap, seeded)',
     'arc elasticities by the midpoint formula',
     'logistic purchase curve by maximum likelihood (fractional logit when intent is calibrated)',
     `standard errors cluster-robust by respondent (${clusters} clusters, factor G/(G−1)); intervals normal (delta method)`,
   ];
+}
+
+/** The monotone rules in words a client can check against the questionnaire. */
+const monotoneRuleText: Readonly<Record<MonotoneRule, string>> = {
+  'carry-no-upward':
+    'answers made consistent per respondent: a no at one price counts as a no at every higher price (a yes above a no is read as no)',
+  'carry-yes-downward':
+    'answers made consistent per respondent: a yes at one price counts as a yes at every lower price (a no below a yes is read as yes)',
+  keep: 'answers used as given, even where a respondent would buy at a higher price but not at a lower one',
+};
+
+function calibrationText(calibration: IntentCalibration): string {
+  const points = ([5, 4, 3, 2, 1] as const).map(
+    (point) => `${point} → ${Math.round(calibration[point] * 100)} %`,
+  );
+  return `${points.join(', ')} (5 = most likely to buy)`;
 }

@@ -19,6 +19,14 @@ describe('analysePriceThresholds on the Van Westendorp worked example', () => {
   const a = analysePriceThresholds({ answers });
   const b = analysePriceThresholds({ answers, convention: 'not-cheap-not-expensive' });
 
+  it('names the curves that define the marginal points in words, not by a code', () => {
+    expect(a.assumptions).toContain(
+      'point of marginal cheapness where too cheap crosses expensive; point of marginal expensiveness where cheap crosses too expensive',
+    );
+    expect(b.assumptions.join(' ')).toContain('where too cheap crosses not cheap');
+    expect([...a.assumptions, ...b.assumptions].join(' ')).not.toMatch(/'[a-z-]+' convention/);
+  });
+
   it('builds the four curves and their complements on the union grid', () => {
     // CHECKS.md §4, curves computed there from the published construction.
     for (const [price, row] of Object.entries(vw.curves)) {

@@ -91,10 +91,12 @@ function thresholdAssumptions(
   return [
     'too cheap and cheap curves count answers at or above the price; expensive and too expensive at or below',
     'curves evaluated on the union of stated prices and interpolated linearly',
-    `marginal points by the '${convention}' convention`,
+    convention === 'cheap-expensive'
+      ? 'point of marginal cheapness where too cheap crosses expensive; point of marginal expensiveness where cheap crosses too expensive'
+      : 'point of marginal cheapness where too cheap crosses not cheap; point of marginal expensiveness where not expensive crosses too expensive',
     `a run of tied grid prices is placed at its ${tieRule === 'midpoint' ? 'midpoint' : 'first price'}`,
     rule === 'exclude'
-      ? `${outOfOrder} respondent(s) with thresholds out of order excluded`
+      ? `${outOfOrder} ${outOfOrder === 1 ? 'respondent' : 'respondents'} with thresholds out of order left out`
       : 'respondents with thresholds out of order kept as answered',
   ];
 }

@@ -17,12 +17,24 @@ export function optimalPrice(curve: DemandCurve, unitCost = 0): number {
   const form = curve.closedForm;
   if (form?.kind === 'linear') {
     const choke = form.intercept / form.slope;
-    if (unitCost >= choke) throw noInterior(curve, 'unit cost is at or above the choke price');
+    if (unitCost >= choke)
+      throw noInterior(
+        curve,
+        'the unit cost is at or above the price at which demand reaches zero',
+      );
     return (choke + unitCost) / 2;
   }
   if (form?.kind === 'constant-elasticity') {
-    if (!(form.elasticity < -1)) throw noInterior(curve, 'demand is not elastic (ε ≥ −1)');
-    if (unitCost === 0) throw noInterior(curve, 'revenue falls at every price when ε < −1');
+    if (!(form.elasticity < -1))
+      throw noInterior(
+        curve,
+        'demand is inelastic (elasticity −1 or above), so a higher price always earns more',
+      );
+    if (unitCost === 0)
+      throw noInterior(
+        curve,
+        'demand is elastic (elasticity below −1), so revenue falls as the price rises, at every price',
+      );
     return inverseElasticityPrice(unitCost, form.elasticity);
   }
   if (curve.discrete) return stepOptimalPrice(curve, unitCost);
@@ -31,7 +43,7 @@ export function optimalPrice(curve: DemandCurve, unitCost = 0): number {
   const best = maximiseOnInterval((p) => (p - unitCost) * curve.quantity(p), lo, range.max);
   const edge = 1e-7 * Math.max(1, range.max - lo);
   if (best.x - lo < edge || range.max - best.x < edge)
-    throw noInterior(curve, 'the maximum is on the edge of the price range');
+    throw noInterior(curve, 'the best value lies at the edge of the prices the curve covers');
   return polishOnFirstOrderCondition(curve, unitCost, best.x, edge);
 }
 
@@ -54,7 +66,7 @@ function stepOptimalPrice(curve: DemandCurve, unitCost: number): number {
     const value = (price - unitCost) * curve.quantity(price);
     if (value > bestValue) [best, bestValue] = [price, value];
   }
-  if (best === null) throw noInterior(curve, 'no step price leaves a positive margin');
+  if (best === null) throw noInterior(curve, 'no price step is above the unit cost');
   return best;
 }
 
@@ -102,7 +114,7 @@ export function lernerIndex(elasticity: number): number {
 function noInterior(curve: DemandCurve, why: string): EstimationError {
   return new EstimationError(
     'no-interior-maximum',
-    `${curve.description}: no interior maximum (${why})`,
+    `no best price inside the curve's price range: ${why} (curve ${curve.description})`,
     'price',
   );
 }

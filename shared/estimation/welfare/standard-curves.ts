@@ -1,6 +1,7 @@
 import { EstimationError } from '../estimation-error';
 import { logistic } from '../maximum-likelihood/binomial-logit';
 import type { DemandCurve, PriceRange } from './demand-curve';
+import { formulaNumber, formulaTerm } from '../formula-number';
 
 /** Linear demand Q = intercept − slope·P, clipped at 0 above the choke price intercept/slope. */
 export function linearDemand(intercept: number, slope: number): DemandCurve {
@@ -13,7 +14,7 @@ export function linearDemand(intercept: number, slope: number): DemandCurve {
   }
   const choke = intercept / slope;
   return {
-    description: `Q = ${intercept} − ${slope}·P`,
+    description: `Q = ${formulaNumber(intercept)} − ${formulaNumber(slope)}·P`,
     quantity: (p) => Math.max(0, intercept - slope * p),
     slope: (p) => (p < choke ? -slope : 0),
     priceRange: { min: 0, max: choke },
@@ -35,7 +36,7 @@ export function constantElasticityDemand(
     );
   }
   return {
-    description: `Q = ${scale}·P^${elasticity}`,
+    description: `Q = ${formulaNumber(scale)}·P^${formulaNumber(elasticity)}`,
     quantity: (p) => scale * p ** elasticity,
     slope: (p) => scale * elasticity * p ** (elasticity - 1),
     priceRange: range,
@@ -54,7 +55,7 @@ export function logisticShareDemand(
   marketSize = 1,
 ): DemandCurve {
   return {
-    description: `share = 1/(1 + exp(−(${a} + ${b}·P)))`,
+    description: `share = 1/(1 + exp(−(${formulaNumber(a)} ${formulaTerm(b)}·P)))`,
     quantity: (p) => marketSize * logistic(a + b * p),
     slope: (p) => {
       const s = logistic(a + b * p);

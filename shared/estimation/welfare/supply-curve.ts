@@ -1,4 +1,5 @@
 import { EstimationError } from '../estimation-error';
+import { formulaNumber, formulaTerm } from '../formula-number';
 
 /** Quantity offered at a price; `linear` declares Qs = intercept + slope·P for closed forms. */
 export interface SupplyCurve {
@@ -18,7 +19,7 @@ export function linearSupply(intercept: number, slope: number): SupplyCurve {
     );
   }
   return {
-    description: `Qs = ${intercept} + ${slope}·P`,
+    description: `Qs = ${formulaNumber(intercept)} ${formulaTerm(slope)}·P`,
     quantity: (p) => intercept + slope * p,
     slope: () => slope,
     linear: { intercept, slope },
@@ -44,7 +45,7 @@ export function constantElasticitySupply(
     );
   }
   return {
-    description: `Qs = ${quantity}·(P/${price})^${elasticity}`,
+    description: `Qs = ${formulaNumber(quantity)}·(P/${formulaNumber(price)})^${formulaNumber(elasticity)}`,
     quantity: (p) => (p <= 0 ? 0 : quantity * (p / price) ** elasticity),
     slope: (p) => (p <= 0 ? 0 : (quantity * elasticity * (p / price) ** (elasticity - 1)) / price),
   };

@@ -5,6 +5,7 @@ import type { IntervalCensoredFit } from '../maximum-likelihood/interval-censore
 import type { LatentDistribution } from '../maximum-likelihood/latent-distribution';
 import { softplus } from '../maximum-likelihood/binomial-logit';
 import { quadraticForm } from '../maximum-likelihood/small-matrix';
+import { formulaNumber, formulaTerm } from '../formula-number';
 
 /** WTP figures of a fitted model P(WTP > b) = F(α − β·b). */
 export interface WtpModelSummary {
@@ -54,7 +55,7 @@ export function wtpModelCurve(
 ): FittedDemandCurve {
   const { alpha: a, beta: b, covariance: v } = fit;
   return {
-    description: `share = F(${a} − ${b}·P), F ${dist.name}`,
+    description: `share = F(${formulaNumber(a)} ${formulaTerm(-b)}·P), F the ${dist.name} distribution function`,
     method,
     quantityKind: 'share',
     quantity: (p) => dist.cdf(a - b * p),

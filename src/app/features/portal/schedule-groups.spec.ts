@@ -44,6 +44,15 @@ describe('groupByStudy', () => {
     expect(groups[1].current).toHaveLength(1);
   });
 
+  it('shows only the newest of two versions in force that share a title as current', () => {
+    const [group] = groupByStudy([
+      { ...version('1', 'Lanterns, Lakeshore', 1), title: 'Lantern demand' },
+      { ...version('1', 'Lanterns, Lakeshore', 2), title: 'Lantern demand' },
+    ]);
+    expect(group.current.map((v) => v.version)).toEqual([2]);
+    expect(group.replaced.map((v) => v.version)).toEqual([1]);
+  });
+
   it('gives no groups when nothing is published', () => {
     expect(groupByStudy([])).toEqual([]);
   });

@@ -1,4 +1,5 @@
 import type { ScheduleVersionSummary } from '@shared/analysis/schedule-version';
+import { currentVersionIds } from '../analysis/publish/current-versions';
 
 /** One study's published schedules: the versions in force first, then the replaced ones. */
 export interface StudySchedules {
@@ -18,12 +19,13 @@ export function groupByStudy(versions: readonly ScheduleVersionSummary[]): Study
   return [...byStudy.values()]
     .map((list) => {
       const sorted = [...list].sort((a, b) => b.version - a.version);
+      const inForce = currentVersionIds(sorted);
       return {
         studyId: sorted[0].studyId,
         studyName: sorted[0].studyName,
         productName: sorted[0].productName,
-        current: sorted.filter((v) => v.replacedById === null),
-        replaced: sorted.filter((v) => v.replacedById !== null),
+        current: sorted.filter((v) => inForce.has(v.id)),
+        replaced: sorted.filter((v) => !inForce.has(v.id)),
       };
     })
     .sort((a, b) => a.studyName.localeCompare(b.studyName));

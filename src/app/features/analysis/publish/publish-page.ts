@@ -21,7 +21,7 @@ import { readApiProblem, type ApiProblem } from '../../../core/api-problem';
 import { AnalysisApi } from '../analysis-api';
 import { AnalysisWorkspaceState } from '../analysis-workspace-state';
 import { FitPicker } from '../results/fit-picker';
-
+import { issuesBeyondMessage, publishedNotice } from './publish-notice';
 import { VersionHistory } from './version-history';
 
 /**
@@ -63,6 +63,15 @@ export class PublishPage {
   protected readonly replaces = signal<string | null>(null);
   protected readonly busy = signal(false);
   protected readonly problem = signal<ApiProblem | null>(null);
+  /** The version in force that the chosen fit is already published as, if any. */
+  protected readonly publishedAs = computed(() => {
+    const fitId = this.state.selectedFitId();
+    return this.state.schedules().find((v) => v.fitId === fitId && !v.replacedById) ?? null;
+  });
+  protected readonly listedIssues = computed(() => {
+    const problem = this.problem();
+    return problem ? issuesBeyondMessage(problem) : [];
+  });
   protected readonly thin = computed(() =>
     cellsBelowMinimum(this.state.selectedFit()?.result?.schedule?.rows ?? []),
   );
@@ -89,11 +98,7 @@ export class PublishPage {
       const version = await firstValueFrom(
         this.api.publish(study.id, { fitId, title: this.title(), replaces: this.replaces() }),
       );
-      const told =
-        version.clientsNotified === undefined
-          ? 'the study’s clients are told by e-mail'
-          : `${version.clientsNotified} client(s) told by e-mail`;
-      this.snackBar.open(`Version ${version.version} published; ${told}.`, 'Close', {
+      this.snackBar.open(publishedNotice(version.version, version.clientsNotified), 'Close', {
         duration: 8000,
       });
       this.replaces.set(null);

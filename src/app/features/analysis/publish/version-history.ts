@@ -2,6 +2,7 @@ import { DatePipe } from '@angular/common';
 import { RouterLink } from '@angular/router';
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import type { ScheduleVersionSummary } from '@shared/analysis/schedule-version';
+import { currentVersionIds } from './current-versions';
 
 /**
  * Published versions, newest first, saying which version corrects which: a correction names the
@@ -13,7 +14,7 @@ import type { ScheduleVersionSummary } from '@shared/analysis/schedule-version';
   template: `
     <ol class="versions" aria-label="Published versions">
       @for (v of ordered(); track v.id) {
-        <li class="version" [class.version--replaced]="v.replacedById">
+        <li class="version" [class.version--replaced]="!current().has(v.id)">
           <p class="version__title">
             @if (linkTo(); as link) {
               <a [routerLink]="link(v)" [attr.aria-current]="v.id === currentId() ? 'page' : null"
@@ -24,8 +25,10 @@ import type { ScheduleVersionSummary } from '@shared/analysis/schedule-version';
             }
             @if (v.replacedById) {
               <span class="version__tag">replaced by v{{ versionOf(v.replacedById) }}</span>
-            } @else {
+            } @else if (current().has(v.id)) {
               <span class="version__tag version__tag--current">current</span>
+            } @else {
+              <span class="version__tag">earlier version</span>
             }
           </p>
           <p class="version__meta">
@@ -89,6 +92,7 @@ export class VersionHistory {
   readonly linkTo = input<((version: ScheduleVersionSummary) => string) | null>(null);
   /** The version on screen, marked in the list. */
   readonly currentId = input<string | null>(null);
+  protected readonly current = computed(() => currentVersionIds(this.versions()));
   protected readonly ordered = computed(() =>
     [...this.versions()].sort((a, b) => b.version - a.version),
   );

@@ -10,6 +10,7 @@ import { demandAxisTitles, fitBandedCurve } from '../charts/fit-curves';
 import { ResidualChart } from '../charts/residual-chart';
 import { curveEnsemble } from '@shared/analysis/curve-ensemble';
 import { EstimateValue } from '../figures/estimate-value';
+import { keyFigureNote } from '../figures/key-figure-note';
 import { ScheduleTable } from '../schedule/schedule-table';
 import { CoefficientTable } from './coefficient-table';
 import { DetailLinesChart } from '../charts/detail-lines-chart';
@@ -58,6 +59,15 @@ export class FitResultsPage {
   protected readonly ensemble = computed(() => {
     const result = this.result();
     return result?.curve ? curveEnsemble(result.curve, this.level()) : null;
+  });
+  /** Why each key figure without an interval has none, by label. */
+  protected readonly figureNotes = computed(() => {
+    const result = this.result();
+    const unitCost = this.fit()?.spec.unitCost ?? null;
+    const ensemble = this.ensemble();
+    return new Map(
+      (result?.keyFigures ?? []).map((f) => [f.label, keyFigureNote(f, ensemble, unitCost)]),
+    );
   });
   protected readonly titles = computed(() =>
     demandAxisTitles(this.curve()?.quantityKind ?? 'quantity', this.result()?.currency ?? ''),

@@ -39,6 +39,10 @@ export class ScheduleTable {
   protected readonly estimateTitle = computed(() =>
     this.quantityKind() === 'share' ? 'Buying share (estimate)' : 'Quantity (estimate)',
   );
+  // A share schedule's revenue is price × share: what one person asked brings in, buyer or not.
+  protected readonly revenueTitle = computed(() =>
+    this.quantityKind() === 'share' ? 'Revenue per potential buyer' : 'Revenue',
+  );
   protected readonly shortTitle = computed(() =>
     this.quantityKind() === 'share' ? 'Buying share' : 'Quantity',
   );
