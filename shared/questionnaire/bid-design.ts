@@ -37,7 +37,7 @@ export function checkBidDesign(design: BidDesign, bounds: BidBounds, ctx: BlockI
       ctx.addIssue({
         code: 'custom',
         path: at('bidMinor'),
-        message: `Bid ${i + 1} repeats bid ${first + 1} (${level.bidMinor})`,
+        message: `Bid ${i + 1} repeats bid ${first + 1}`,
       });
     }
     if (bounds === 'single') {
@@ -62,7 +62,8 @@ function checkFollowUps(
   at: (field: string) => (string | number)[],
   ctx: BlockIssueSink,
 ): void {
-  const name = `bid ${i + 1} (${level.bidMinor})`;
+  // Stored amounts are minor units; the researcher typed major ones, so none are quoted.
+  const name = `bid ${i + 1}`;
   if (level.afterYesMinor === undefined) {
     ctx.addIssue({
       code: 'custom',
@@ -73,7 +74,7 @@ function checkFollowUps(
     ctx.addIssue({
       code: 'custom',
       path: at('afterYesMinor'),
-      message: `The follow-up after a yes (${level.afterYesMinor}) must be higher than ${name}`,
+      message: `The follow-up after a yes must be higher than ${name}`,
     });
   }
   if (level.afterNoMinor === undefined) {
@@ -86,7 +87,7 @@ function checkFollowUps(
     ctx.addIssue({
       code: 'custom',
       path: at('afterNoMinor'),
-      message: `The follow-up after a no (${level.afterNoMinor}) must be lower than ${name}`,
+      message: `The follow-up after a no must be lower than ${name}`,
     });
   }
 }

@@ -82,7 +82,8 @@ export function analysePaymentCard(
     assumptions: [
       `WTP has a ${distribution} distribution on the whole real line; a stated lower bound of 0 is taken literally`,
       'each answer means lower ≤ WTP < upper; the top interval is open',
-      'median = mean = α/β (μ); intervals by the delta method from the inverse information',
+      'median = mean over the real line = α/β (μ); mean of max(WTP, 0) = μΦ(μ/σ) + σφ(μ/σ), the mean shown with WTP ≥ 0',
+      'intervals by the delta method from the inverse information',
     ],
   };
 }
