@@ -66,4 +66,5 @@ export const problemFieldLabels: Readonly<Record<string, string>> = {
 export const problemFieldLabelsByKind: Readonly<Record<string, Readonly<Record<string, string>>>> =
   {
     'purchase-recall': { periodDays: 'Period remembered' },
+    'shelf-observation': { maxPriceMinor: 'Highest shelf price an enumerator may record' },
   };

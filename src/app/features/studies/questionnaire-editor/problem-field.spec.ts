@@ -27,6 +27,10 @@ describe('problemFieldLabel', () => {
   it('uses the label of the panel of the block’s kind where it differs', () => {
     expect(problemFieldLabel('periodDays', 'purchase-recall')).toBe('Period remembered');
     expect(problemFieldLabel('periodDays', 'shelf-observation')).toBe('Period');
+    expect(problemFieldLabel('maxPriceMinor', 'shelf-observation')).toBe(
+      'Highest shelf price an enumerator may record',
+    );
+    expect(problemFieldLabel('maxPriceMinor', 'price-thresholds')).toBe('Highest price accepted');
   });
 
   it('falls back to the nearest labelled field, then to words, never to a raw key', () => {

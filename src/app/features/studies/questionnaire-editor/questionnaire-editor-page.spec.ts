@@ -1,4 +1,5 @@
 import { TestBed } from '@angular/core/testing';
+import { MatDialog } from '@angular/material/dialog';
 import { provideRouter } from '@angular/router';
 import { starterBlock } from '@shared/questionnaire/block-starters';
 import type { QuestionnaireVersion } from '@shared/questionnaire/questionnaire-resource';
@@ -7,6 +8,7 @@ import { of } from 'rxjs';
 import { QuestionnairesApi } from '../questionnaires-api';
 import { StudiesApi } from '../studies-api';
 import { EditorState } from './editor-state';
+import { LeaveDialog } from './leave-dialog';
 import { QuestionnaireEditorPage } from './questionnaire-editor-page';
 
 const study = {
@@ -95,5 +97,90 @@ describe('QuestionnaireEditorPage', () => {
     const { page, element } = await render('published');
     expect(element.querySelector('app-block-palette')).toBeNull();
     expect(page.hasUnsavedChanges()).toBe(false);
+  });
+});
+
+describe('QuestionnaireEditorPage version menu', () => {
+  const open = vi.fn();
+  const versions = [
+    { ...draft('draft'), id: 'v2', version: 2 },
+    { ...draft('published'), id: 'v1', version: 1, publishedAt: '2026-03-02T08:00:00.000Z' },
+  ];
+  const loadVersion = vi.fn((_study: string, _questionnaire: string, number: number) =>
+    of(versions.find((v) => v.version === number)!),
+  );
+
+  async function render() {
+    open.mockReset();
+    loadVersion.mockClear();
+    TestBed.configureTestingModule({
+      imports: [QuestionnaireEditorPage],
+      providers: [
+        provideRouter([]),
+        { provide: StudiesApi, useValue: { get: () => of(study) } },
+        {
+          provide: QuestionnairesApi,
+          useValue: {
+            get: () => of({ id: 'q1', studyId: study.id, title: 'Filters', versions }),
+            version: loadVersion,
+          },
+        },
+        { provide: MatDialog, useValue: { open } },
+      ],
+    });
+    const fixture = TestBed.createComponent(QuestionnaireEditorPage);
+    fixture.componentRef.setInput('studyId', study.id);
+    fixture.componentRef.setInput('questionnaireId', 'q1');
+    await fixture.whenStable();
+    const element = fixture.nativeElement as HTMLElement;
+    const state = fixture.debugElement.injector.get(EditorState);
+    const choose = async (label: string) => {
+      element.querySelector<HTMLElement>('.mat-mdc-select-trigger')!.click();
+      await fixture.whenStable();
+      Array.from(document.querySelectorAll<HTMLElement>('mat-option'))
+        .find((option) => option.textContent?.includes(label))!
+        .click();
+      await fixture.whenStable();
+    };
+    const menuShows = () => element.querySelector('.mat-mdc-select-value')?.textContent?.trim();
+    return { fixture, state, choose, menuShows };
+  }
+
+  function answerLeave(discard: boolean) {
+    open.mockReturnValue({ afterClosed: () => of(discard) });
+  }
+
+  it('opens another version straight away when nothing is unsaved', async () => {
+    const { state, choose, menuShows } = await render();
+    await choose('Version 1');
+    expect(open).not.toHaveBeenCalled();
+    expect(loadVersion).toHaveBeenLastCalledWith(study.id, 'q1', 1);
+    expect(state.dirty()).toBe(false);
+    expect(menuShows()).toContain('Version 1');
+  });
+
+  it('asks before another version replaces unsaved edits, and opens it on discard', async () => {
+    const { state, choose, menuShows } = await render();
+    state.add('number');
+    answerLeave(true);
+    await choose('Version 1');
+    expect(open).toHaveBeenCalledWith(LeaveDialog);
+    expect(loadVersion).toHaveBeenLastCalledWith(study.id, 'q1', 1);
+    expect(state.dirty()).toBe(false);
+    expect(state.definition().blocks).toHaveLength(1);
+    expect(menuShows()).toContain('Version 1');
+  });
+
+  it('keeps the edits and the version being edited in the menu when the researcher stays', async () => {
+    const { state, choose, menuShows } = await render();
+    state.add('number');
+    answerLeave(false);
+    await choose('Version 1');
+    expect(open).toHaveBeenCalledWith(LeaveDialog);
+    expect(loadVersion).not.toHaveBeenCalledWith(study.id, 'q1', 1);
+    expect(state.dirty()).toBe(true);
+    expect(state.definition().blocks.map((block) => block.kind)).toEqual(['consent', 'number']);
+    expect(menuShows()).toContain('Version 2');
+    expect(menuShows()).not.toContain('Version 1');
   });
 });

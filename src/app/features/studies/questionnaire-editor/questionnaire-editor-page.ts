@@ -6,12 +6,14 @@ import {
   inject,
   input,
   signal,
+  viewChild,
 } from '@angular/core';
 import { MatButton } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
-import { MatSelectModule } from '@angular/material/select';
+import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { RouterLink } from '@angular/router';
 import type { FieldIssue } from '@shared/http/api-error';
 import type { BlockKind } from '@shared/questionnaire/block-kind';
@@ -29,14 +31,15 @@ import { EditorState } from './editor-state';
 import { serverIssueWhere } from './problem-field';
 import { ProblemList } from './problem-list';
 import { QuestionnairePreview } from './questionnaire-preview';
-import type { HoldsUnsavedChanges } from './unsaved-changes-guard';
+import { type HoldsUnsavedChanges, confirmDiscard } from './unsaved-changes-guard';
 
 /**
  * The questionnaire editor: blocks to add, order and configure, every problem linked to its
  * block, and a live preview. A draft saves only when the shared rules find nothing wrong; a
  * published version is shown read-only, with a way to start the next draft from it. Leaving
- * with unsaved changes asks first: in the app through the route's guard, and on closing or
- * reloading the tab through the browser's own prompt.
+ * with unsaved changes asks first: in the app through the route's guard (and the same question
+ * before another version is opened), and on closing or reloading the tab through the browser's
+ * own prompt.
  */
 @Component({
   selector: 'app-questionnaire-editor-page',
@@ -61,6 +64,8 @@ import type { HoldsUnsavedChanges } from './unsaved-changes-guard';
 export class QuestionnaireEditorPage implements OnInit, HoldsUnsavedChanges {
   private readonly studies = inject(StudiesApi);
   private readonly api = inject(QuestionnairesApi);
+  private readonly dialog = inject(MatDialog);
+  private readonly versionMenu = viewChild(MatSelect);
   protected readonly state = inject(EditorState);
 
   readonly studyId = input.required<string>();
@@ -118,7 +123,22 @@ export class QuestionnaireEditorPage implements OnInit, HoldsUnsavedChanges {
     event.returnValue = true;
   }
 
-  protected openVersion(version: number): void {
+  /**
+   * Opening another version replaces the blocks on screen, so unsaved edits are asked about
+   * first; when the researcher stays, the menu goes back to the version still being edited.
+   */
+  protected chooseVersion(version: number): void {
+    if (!this.hasUnsavedChanges()) {
+      this.openVersion(version);
+      return;
+    }
+    confirmDiscard(this.dialog).subscribe((discard) => {
+      if (discard) this.openVersion(version);
+      else this.versionMenu()?.writeValue(this.version()?.version);
+    });
+  }
+
+  private openVersion(version: number): void {
     this.api.version(this.studyId(), this.questionnaireId(), version).subscribe({
       next: (loaded) => this.show(loaded),
       error: (error: unknown) => this.failure.set(readApiProblem(error).message),

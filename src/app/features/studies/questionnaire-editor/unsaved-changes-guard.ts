@@ -10,15 +10,20 @@ export interface HoldsUnsavedChanges {
 }
 
 /**
- * Lets the router leave a page freely when nothing is unsaved; otherwise asks first, and stays
- * unless the person chooses to discard (closing the dialog by Escape or a click outside stays).
+ * Asks with the leave dialog whether unsaved edits may go: `true` only when the person
+ * chooses to discard (closing the dialog by Escape or a click outside keeps them).
  */
+export function confirmDiscard(dialog: MatDialog): Observable<boolean> {
+  return dialog
+    .open<LeaveDialog, undefined, boolean>(LeaveDialog)
+    .afterClosed()
+    .pipe(map((leave) => leave === true));
+}
+
+/** Lets the router leave a page freely when nothing is unsaved; otherwise asks first. */
 export const unsavedChangesGuard: CanDeactivateFn<HoldsUnsavedChanges> = (
   page,
 ): boolean | Observable<boolean> => {
   if (!page?.hasUnsavedChanges()) return true;
-  return inject(MatDialog)
-    .open<LeaveDialog, undefined, boolean>(LeaveDialog)
-    .afterClosed()
-    .pipe(map((leave) => leave === true));
+  return confirmDiscard(inject(MatDialog));
 };

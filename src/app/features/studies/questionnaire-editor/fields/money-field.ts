@@ -9,7 +9,8 @@ import type { MoneyContext } from './money-context';
 /**
  * An amount typed as a decimal of the study's currency and held as integer minor units. What
  * cannot be read is explained under the field and passed on as no amount, so the questionnaire's
- * problem list shows it too.
+ * problem list shows it too. With `emptyHint` the amount is optional: an empty field is no
+ * problem, and the hint says what applies instead.
  */
 @Component({
   selector: 'app-money-field',
@@ -30,6 +31,8 @@ import type { MoneyContext } from './money-context';
         <mat-hint class="field-error">{{ message }}</mat-hint>
       } @else if (valueMinor() !== undefined) {
         <mat-hint>{{ formatted() }}</mat-hint>
+      } @else if (emptyHint(); as hint) {
+        <mat-hint>{{ hint }}</mat-hint>
       }
     </mat-form-field>
   `,
@@ -48,6 +51,7 @@ export class MoneyField {
   readonly valueMinor = input<number | undefined>();
   readonly money = input.required<MoneyContext>();
   readonly readOnly = input(false);
+  readonly emptyHint = input<string>();
   readonly valueMinorChange = output<number | undefined>();
 
   protected readonly problem = signal<string | null>(null);
@@ -81,7 +85,7 @@ export class MoneyField {
   protected read(text: string): void {
     this.typed.set(text);
     if (text.trim() === '') {
-      this.problem.set('Enter an amount');
+      this.problem.set(this.emptyHint() === undefined ? 'Enter an amount' : null);
       this.valueMinorChange.emit(undefined);
       return;
     }

@@ -1,14 +1,22 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed } from '@angular/core';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatSelectModule } from '@angular/material/select';
-import type { ShelfObservationBlock } from '@shared/questionnaire/blocks/shelf-observation-block';
+import { formatMoney } from '@shared/money/format-money';
+import {
+  type ShelfObservationBlock,
+  defaultShelfPriceCapMinor,
+} from '@shared/questionnaire/blocks/shelf-observation-block';
+import { MoneyField } from '../fields/money-field';
 import { NumberField } from '../fields/number-field';
 import { KindSettings, settingsStyles } from './kind-settings';
 
-/** Shelf observation: pack unit, what is counted (and over how long), and the tag photo. */
+/**
+ * Shelf observation: pack unit, what is counted (and over how long), the tag photo, and the
+ * highest price the device takes, which may be left to the general cap.
+ */
 @Component({
   selector: 'app-shelf-observation-settings',
-  imports: [MatFormFieldModule, MatSelectModule, NumberField],
+  imports: [MatFormFieldModule, MatSelectModule, MoneyField, NumberField],
   template: `
     <div class="pair">
       <mat-form-field appearance="outline">
@@ -60,11 +68,24 @@ import { KindSettings, settingsStyles } from './kind-settings';
         />
       }
     </div>
+    <app-money-field
+      label="Highest shelf price an enumerator may record"
+      [valueMinor]="block().maxPriceMinor"
+      [money]="money()"
+      [readOnly]="readOnly()"
+      [emptyHint]="defaultCapHint()"
+      (valueMinorChange)="patch({ maxPriceMinor: $event })"
+    />
   `,
   styles: settingsStyles,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ShelfObservationSettings extends KindSettings<ShelfObservationBlock> {
+  protected readonly defaultCapHint = computed(() => {
+    const { currency, locale } = this.money();
+    return `Left empty, prices up to ${formatMoney(defaultShelfPriceCapMinor, currency, locale)} are accepted`;
+  });
+
   protected setMeasure(measure: ShelfObservationBlock['measure']): void {
     this.patch({
       measure,
