@@ -1,5 +1,6 @@
 import type { RequestHandler } from 'express';
 import { z } from 'zod';
+import { roleLabels, type Role } from '@shared/auth/role';
 import type { Database } from '../db/database';
 import { HttpError, forbidden, notFound, notSignedIn } from '../http/http-error';
 import type { Actor } from './actor';
@@ -29,8 +30,7 @@ export function accessGuard(db: Database): RequestHandler {
     if (!actor) throw notSignedIn();
     if (rule.access === 'signed-in') return next();
     const allowed = rule.access;
-    const needed = `This needs the ${allowed.join(' or ')} role`;
-    if (!actor.roles.some((role) => allowed.includes(role))) throw forbidden(`${needed}.`);
+    if (!actor.roles.some((role) => allowed.includes(role))) throw forbidden(openOnlyTo(allowed));
     if (rule.scope === 'study') {
       const studyId = studyIdSchema.safeParse(params['studyId']);
       if (!studyId.success)
@@ -40,9 +40,20 @@ export function accessGuard(db: Database): RequestHandler {
       const studyRoles = await studyRolesOf(db, studyId.data, actor);
       if (!studyRoles) throw notFound('That study');
       if (!studyRoles.some((role) => allowed.includes(role)))
-        throw forbidden(`${needed} in this study.`);
+        throw forbidden(openOnlyTo(allowed, 'in this study'));
       res.locals['studyRoles'] = studyRoles;
     }
     next();
   };
+}
+
+/**
+ * The refusal an API caller reads: plain words, yet naming the roles, so an integrator knows
+ * which account the call needs ("This is open to researchers and supervisors only.").
+ */
+export function openOnlyTo(allowed: readonly Role[], where?: 'in this study'): string {
+  const people = allowed.map((role) => `${roleLabels[role].toLowerCase()}s`);
+  const listed =
+    people.length > 1 ? `${people.slice(0, -1).join(', ')} and ${people.at(-1)}` : people[0];
+  return `This is open to ${listed} only${where ? ` ${where}` : ''}.`;
 }

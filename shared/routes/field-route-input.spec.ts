@@ -49,9 +49,21 @@ describe('fieldRouteInputSchema', () => {
     ]);
   });
 
-  it('refuses an impossible date', () => {
+  it('refuses an impossible date, saying how a day is written', () => {
     expect(issuesOf({ ...valid, windowStart: '2027-02-30' })).toEqual([
-      { path: 'windowStart', message: 'The first day must be a date like 2027-03-01.' },
+      {
+        path: 'windowStart',
+        message: 'The first day must be a real day written YYYY-MM-DD, such as 2027-03-01.',
+      },
+    ]);
+  });
+
+  it('refuses a last day in another format with the same wording', () => {
+    expect(issuesOf({ ...valid, windowEnd: '07/03/2027' })).toEqual([
+      {
+        path: 'windowEnd',
+        message: 'The last day must be a real day written YYYY-MM-DD, such as 2027-03-01.',
+      },
     ]);
   });
 

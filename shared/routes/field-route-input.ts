@@ -11,7 +11,10 @@ export const routeStopInputSchema = z.object({
 });
 export type RouteStopInput = z.infer<typeof routeStopInputSchema>;
 
-const isoDate = (what: string) => z.iso.date({ error: `${what} must be a date like 2027-03-01.` });
+// API callers type these days by hand: the message names the format, not just an example.
+const isoDate = (what: string) =>
+  z.iso.date({ error: `${what} must be a real day written YYYY-MM-DD, such as 2027-03-01.` });
+const isDay = (value: unknown) => z.iso.date().safeParse(value).success;
 
 /**
  * Body of creating (`POST`) or replacing (`PUT`) a route. Stops are in visiting order, each point
@@ -35,7 +38,10 @@ export const fieldRouteInputSchema = z
   })
   .strict()
   .superRefine((route, context) => {
-    if (route.windowEnd < route.windowStart) {
+    // zod still runs this when a day is unreadable; comparing then would add a second, wrong
+    // complaint about the order of the days.
+    const bothDays = isDay(route.windowStart) && isDay(route.windowEnd);
+    if (bothDays && route.windowEnd < route.windowStart) {
       context.addIssue({
         code: 'custom',
         path: ['windowEnd'],

@@ -51,10 +51,10 @@ describe('readApiProblem', () => {
   it('words a role refusal plainly, without naming roles', () => {
     const refusal = (message: string) =>
       readApiProblem(response(403, { error: { code: 'forbidden', message } })).message;
-    expect(refusal('This needs the researcher or supervisor or enumerator role.')).toBe(
+    expect(refusal('This is open to researchers, supervisors and enumerators only.')).toBe(
       'This page is not open to your account.',
     );
-    expect(refusal('This needs the supervisor role in this study.')).toBe(
+    expect(refusal('This is open to supervisors only in this study.')).toBe(
       'This page is not open to your account in this study.',
     );
     expect(refusal('Only the study’s supervisors may assign routes.')).toBe(

@@ -23,9 +23,9 @@ const fallbackMessages: Record<number, string> = {
 const offlineMessage =
   'This device is offline. Fieldcurve will load this once the connection is back.';
 
-// The server's role refusal names roles ("This needs the researcher or supervisor role."):
+// The server's role refusal names roles ("This is open to researchers and supervisors only."):
 // readers get the plain sentence the route guard uses.
-const roleRefusal = /^This needs the [a-z ]+ role( in this study)?\.$/;
+const roleRefusal = /^This is open to [a-z, ]+ only( in this study)?\.$/;
 
 /** Reads the `{ error: { code, message, issues? } }` body the API sends, or explains the status. */
 export function readApiProblem(error: unknown): ApiProblem {

@@ -1,21 +1,24 @@
 import type { ScheduleVersionSummary } from '@shared/analysis/schedule-version';
 import { groupByStudy } from './schedule-groups';
 
+const idOf = (studyId: string, n: number) =>
+  `0000000${n}-0000-4000-8000-${studyId.padStart(12, '0')}`;
+
 function version(
   studyId: string,
   studyName: string,
   n: number,
-  replacedById: string | null = null,
+  replacedBy: number | null = null,
 ): ScheduleVersionSummary {
   return {
-    id: `0000000${n}-0000-4000-8000-${studyId.padStart(12, '0')}`,
+    id: idOf(studyId, n),
     studyId,
     studyName,
     productName: 'Solar lantern',
     version: n,
     title: `Schedule ${n}`,
     replacesId: null,
-    replacedById,
+    replacedById: replacedBy === null ? null : idOf(studyId, replacedBy),
     fitId: '9b1e5c2a-3f4d-4e6f-8a7b-1c2d3e4f5a6b',
     method: 'price-ladder',
     methodLabel: 'Price ladder (Gabor–Granger)',
@@ -27,11 +30,13 @@ function version(
   };
 }
 
+const titled = (title: string, v: ScheduleVersionSummary) => ({ ...v, title });
+
 describe('groupByStudy', () => {
-  it('groups by study in name order, current versions apart from replaced ones, newest first', () => {
+  it('groups by study in name order, current versions apart from earlier ones, newest first', () => {
     const groups = groupByStudy([
       version('2', 'Water filters, Reedbank', 1),
-      version('1', 'Lanterns, Lakeshore', 1, 'replaced-by-2'),
+      version('1', 'Lanterns, Lakeshore', 1, 3),
       version('1', 'Lanterns, Lakeshore', 2),
       version('1', 'Lanterns, Lakeshore', 3),
     ]);
@@ -40,17 +45,51 @@ describe('groupByStudy', () => {
       'Water filters, Reedbank',
     ]);
     expect(groups[0].current.map((v) => v.version)).toEqual([3, 2]);
-    expect(groups[0].replaced.map((v) => v.version)).toEqual([1]);
+    expect(groups[0].earlier.map((e) => [e.version.version, e.newer.version, e.corrected])).toEqual(
+      [[1, 3, true]],
+    );
     expect(groups[1].current).toHaveLength(1);
+    expect(groups[1].earlier).toEqual([]);
   });
 
-  it('shows only the newest of two versions in force that share a title as current', () => {
+  it('keeps an older version of another title current, even though nothing replaced it', () => {
     const [group] = groupByStudy([
-      { ...version('1', 'Lanterns, Lakeshore', 1), title: 'Lantern demand' },
-      { ...version('1', 'Lanterns, Lakeshore', 2), title: 'Lantern demand' },
+      titled('Lantern demand', version('1', 'Lanterns, Lakeshore', 1)),
+      titled('Shelf prices', version('1', 'Lanterns, Lakeshore', 2)),
+    ]);
+    expect(group.current.map((v) => v.version)).toEqual([2, 1]);
+    expect(group.earlier).toEqual([]);
+  });
+
+  it('lists the older of two versions under one title as earlier, naming the newer one', () => {
+    const [group] = groupByStudy([
+      titled('Lantern demand', version('1', 'Lanterns, Lakeshore', 1)),
+      titled('Lantern demand ', version('1', 'Lanterns, Lakeshore', 2)),
     ]);
     expect(group.current.map((v) => v.version)).toEqual([2]);
-    expect(group.replaced.map((v) => v.version)).toEqual([1]);
+    expect(group.earlier.map((e) => [e.version.version, e.newer.version, e.corrected])).toEqual([
+      [1, 2, false],
+    ]);
+  });
+
+  it('names the version in force, not a replaced one, as the newer of the same title', () => {
+    const [group] = groupByStudy([
+      titled('Lantern demand', version('1', 'Lanterns, Lakeshore', 1)),
+      titled('Lantern demand', version('1', 'Lanterns, Lakeshore', 2)),
+      titled('Lantern demand', version('1', 'Lanterns, Lakeshore', 3, 4)),
+      titled('Lantern demand, corrected', version('1', 'Lanterns, Lakeshore', 4)),
+    ]);
+    expect(group.current.map((v) => v.version)).toEqual([4, 2]);
+    expect(group.earlier.map((e) => [e.version.version, e.newer.version])).toEqual([
+      [3, 4],
+      [1, 2],
+    ]);
+  });
+
+  it('keeps a version current when the correction it names is not among the versions', () => {
+    const [group] = groupByStudy([version('1', 'Lanterns, Lakeshore', 1, 9)]);
+    expect(group.current.map((v) => v.version)).toEqual([1]);
+    expect(group.earlier).toEqual([]);
   });
 
   it('gives no groups when nothing is published', () => {

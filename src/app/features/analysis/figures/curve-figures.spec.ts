@@ -99,6 +99,6 @@ describe('simulation intervals', () => {
     expect(format.figure({ estimate: 25, low: 24.5, high: 25.75, note: null }, 'price', 0.95)).toBe(
       '$25 (95 % interval $24.50 to $25.75)',
     );
-    expect(format.value(-2 / 3, 'elasticity')).toBe('-0.67');
+    expect(format.value(-2 / 3, 'elasticity')).toBe('\u22120.67');
   });
 });

@@ -5,7 +5,8 @@ export type FigureUnit = 'price' | 'share' | 'quantity' | 'elasticity' | 'index'
 
 /**
  * Writes figures for one study: prices in its currency and locale, shares as percentages,
- * elasticities to two decimals, quantities to four significant digits.
+ * elasticities to two decimals, quantities to four significant digits; negative numbers with a
+ * true minus sign.
  */
 export class FigureFormat {
   private readonly formats: Record<FigureUnit, Intl.NumberFormat>;
@@ -14,7 +15,14 @@ export class FigureFormat {
     readonly currency: string,
     readonly locale: string,
   ) {
-    const plain = (options: Intl.NumberFormatOptions) => new Intl.NumberFormat(locale, options);
+    // 'negative': a value that rounds to zero is written 0, never a signed zero.
+    // 'negative': a value that rounds to zero is written 0, never a signed zero. (The option is
+    // newer than TypeScript's lib typings, as is trailingZeroDisplay below.)
+    const plain = (options: Intl.NumberFormatOptions) =>
+      new Intl.NumberFormat(locale, {
+        signDisplay: 'negative',
+        ...options,
+      } as Intl.NumberFormatOptions);
     this.formats = {
       // Whole amounts without ".00": schedules are mostly on round prices.
       price: plain({
@@ -34,7 +42,12 @@ export class FigureFormat {
   /** One number; a dash for a missing one. */
   value(value: number | null | undefined, unit: FigureUnit): string {
     if (value === null || value === undefined || !Number.isFinite(value)) return '–';
-    return this.formats[unit].format(value);
+    // Most locales write a hyphen-minus; the screens write a true minus sign (U+2212), the
+    // same as in formulas, so a negative figure never reads as a dash or a range.
+    return this.formats[unit]
+      .formatToParts(value)
+      .map((part) => (part.type === 'minusSign' ? '\u2212' : part.value))
+      .join('');
   }
 
   /** "low to high", or null when there is no interval. */

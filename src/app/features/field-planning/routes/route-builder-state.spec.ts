@@ -92,7 +92,9 @@ describe('RouteBuilderState', () => {
     state.setWindow('', '');
     state.showProblems.set(true);
     expect(state.problemAt('stops')).toBe('A route needs at least one stop.');
-    expect(state.problemAt('windowStart')).toBe('The first day must be a date like 2027-03-01.');
+    expect(state.problemAt('windowStart')).toBe(
+      'The first day must be a real day written YYYY-MM-DD, such as 2027-03-01.',
+    );
   });
 
   it('keeps the server’s refusal beside its stop until the route changes', () => {

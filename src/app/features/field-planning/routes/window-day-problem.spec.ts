@@ -7,7 +7,7 @@ import {
 } from '@angular/material/core';
 import { dayExample, windowDayProblem } from './window-day-problem';
 
-const schemaWords = 'The first day must be a date like 2027-03-01.';
+const schemaWords = 'The first day must be a real day written YYYY-MM-DD, such as 2027-03-01.';
 
 function exampleIn(locale: string): string {
   TestBed.configureTestingModule({
@@ -35,7 +35,7 @@ describe('windowDayProblem', () => {
   });
 
   it('says a typed day could not be read, e.g. a six-digit year', () => {
-    const problem = 'The last day must be a date like 2027-03-01.';
+    const problem = 'The last day must be a real day written YYYY-MM-DD, such as 2027-03-01.';
     expect(windowDayProblem('windowEnd', '202626-12-20', problem, '3/25/2027')).toBe(
       'That is not a day we can read. Choose the last day in the calendar, or type it like 3/25/2027.',
     );
