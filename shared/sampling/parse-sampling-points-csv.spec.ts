@@ -166,4 +166,16 @@ describe('parseSamplingPointsCsv', () => {
       { line: 3, column: '', message: 'A quoted cell starting on this line is never closed.' },
     ]);
   });
+
+  it('refuses a file that is not text with one problem and no row checks', () => {
+    const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d]);
+    expect(problemsOf(parseSamplingPointsCsv(new TextDecoder().decode(png)))).toEqual([
+      {
+        line: 1,
+        column: '',
+        message:
+          'This file is not a CSV text file: save the sheet as CSV (comma-separated) and upload that.',
+      },
+    ]);
+  });
 });

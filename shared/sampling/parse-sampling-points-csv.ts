@@ -8,6 +8,7 @@ import {
   type SamplingCsvColumn,
 } from './sampling-csv-columns';
 import { checkPointRows } from './check-point-rows';
+import { textFileProblem } from './text-file-problem';
 import type { SamplingPointInput } from './sampling-point';
 
 /** Either every point of the file, or every problem found in it (and then no points at all). */
@@ -20,9 +21,12 @@ const isBlank = (row: CsvRow) => row.cells.every((cell) => cell.trim() === '');
 /**
  * Reads a sampling-point file (see {@link samplingCsvColumns} for the contract). All or nothing:
  * a single bad cell refuses the file, and the answer lists every problem with its file line
- * (header = line 1) and column, so the whole file can be fixed in one pass.
+ * (header = line 1) and column, so the whole file can be fixed in one pass. A file that is not
+ * UTF-8 text (an image, a workbook) gets that one problem instead of a list about its "cells".
  */
 export function parseSamplingPointsCsv(text: string): SamplingCsvResult {
+  const notText = textFileProblem(text);
+  if (notText) return refuse([notText]);
   const { rows, unclosedQuoteLine } = readCsvRows(text);
   const nonBlank = rows.filter((row) => !isBlank(row));
   if (nonBlank.length === 0) return refuse([fileProblem(1, 'The file is empty.')]);

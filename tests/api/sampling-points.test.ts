@@ -136,6 +136,24 @@ describe('importing a sampling-point file', () => {
     expect(await storedCount()).toBe(0);
   });
 
+  it('refuses a PNG image renamed .csv with one problem and stores nothing', async () => {
+    const png = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d]);
+    const response = await agents.supervisor
+      .post(importPath())
+      .set('Content-Type', 'text/csv')
+      .send(png);
+    expect(response.status).toBe(400);
+    expect(response.body.error.problems).toEqual([
+      {
+        line: 1,
+        column: '',
+        message:
+          'This file is not a CSV text file: save the sheet as CSV (comma-separated) and upload that.',
+      },
+    ]);
+    expect(await storedCount()).toBe(0);
+  });
+
   it('imports a good file and reports what it created', async () => {
     const response = await sendCsv(agents.supervisor, csv(...goodRows));
     expect(response.status).toBe(200);

@@ -51,13 +51,13 @@ async function finishedFits(): Promise<FitSummary[]> {
   return fits.filter((fit) => fit.status === 'done' || fit.status === 'failed');
 }
 
-async function runFitAndWait(expectedFinished: number): Promise<void> {
+async function runFitAndWait(expectedFinished: number, counted: string): Promise<void> {
   await page.getByRole('button', { name: 'Run the fit' }).click();
   const fits = await pollUntil(finishedFits, (list) => list.length >= expectedFinished, 60_000);
   expect(fits.map((fit) => fit.status)).toEqual(new Array(fits.length).fill('done'));
   await page
     .getByRole('status')
-    .getByText(/Fit finished on \d+ respondents/)
+    .getByText(new RegExp(`Fit finished on \\d+ ${counted}\\.`))
     .waitFor();
 }
 
@@ -95,14 +95,14 @@ describe('the researcher’s analysis workspace', () => {
     await page.getByLabel('From', { exact: true }).fill('800');
     await page.getByLabel('To', { exact: true }).fill('2600');
     await page.getByLabel('Prices', { exact: true }).fill('7');
-    await runFitAndWait(1);
+    await runFitAndWait(1, 'shelf observations');
     // The weighted fit reports what the raking cost in precision.
     await page.getByText('Design effect (estimate)').waitFor();
     await screenshotBothSizes('analysis-setup');
     await expectNoSeriousViolations(page, 'the analysis set-up');
 
     await chooseOption(page, page, 'Method', /^Price ladder/);
-    await runFitAndWait(2);
+    await runFitAndWait(2, 'respondents');
   });
 
   it('shows the results: coefficients, the curve with its band, and figures with intervals', async () => {

@@ -17,6 +17,7 @@ import { DetailLinesChart } from '../charts/detail-lines-chart';
 import { DetailTableView } from './detail-table-view';
 import { CurveQuestionCard } from './curve-question-card';
 import { FitPicker } from './fit-picker';
+import { sampleSizeText } from './fit-sample-size';
 
 /** A finished fit: its curve with band and revenue, figures, coefficients and diagnostics. */
 @Component({
@@ -46,6 +47,11 @@ export class FitResultsPage {
   protected readonly fit = this.state.selectedFit;
   protected readonly result = computed(() => this.fit()?.result ?? null);
   protected readonly level = computed(() => this.fit()?.spec.confidenceLevel ?? 0.95);
+  protected readonly sampleSize = computed(() => {
+    const fit = this.fit();
+    const result = this.result();
+    return fit && result ? sampleSizeText(fit.spec, result) : '';
+  });
 
   protected readonly curve = computed(() => {
     const fit = this.fit();

@@ -4,6 +4,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import type { FitResource } from '@shared/analysis/fit-resource';
+import { sampleCount } from '../results/fit-sample-size';
 
 /** Where the fit job started from this screen stands, said in words and with a bar. */
 @Component({
@@ -23,7 +24,7 @@ import type { FitResource } from '@shared/analysis/fit-resource';
         @case ('done') {
           <p class="job__done">
             <mat-icon aria-hidden="true">task_alt</mat-icon>
-            Fit finished on {{ n() }} respondents.
+            Fit finished on {{ sample() }}.
           </p>
           <a mat-flat-button routerLink="../results">See the results</a>
         }
@@ -65,5 +66,7 @@ import type { FitResource } from '@shared/analysis/fit-resource';
 })
 export class FitJobProgress {
   readonly job = input.required<FitResource>();
-  protected readonly n = computed(() => this.job().result?.n ?? 0);
+  protected readonly sample = computed(() =>
+    sampleCount(this.job().spec, this.job().result?.n ?? 0),
+  );
 }
