@@ -1,24 +1,8 @@
-import type { FitSpec, FitSpecOf } from '@shared/analysis/fit-spec';
+import type { FitSpec } from '@shared/analysis/fit-spec';
+import { commonSpecFields as common, shelfFitSpec as ols } from '../testing/fit-spec-fixtures';
 import { FigureFormat } from '../figures/figure-format';
 import { fitDistinctions } from './fit-distinctions';
 
-const common = {
-  filters: { flagged: 'include' as const },
-  weighting: null,
-  priceGrid: { from: 500, to: 4000, steps: 8 },
-  unitCost: null,
-  confidenceLevel: 0.95,
-};
-const ols: FitSpecOf<'observed-prices'> = {
-  method: 'observed-prices',
-  ...common,
-  source: 'shelf',
-  form: 'loglog',
-  covariates: [],
-  regionEffects: false,
-  standardErrors: 'hc1',
-  instrument: 'none',
-};
 const format = new FigureFormat('KES', 'en-KE');
 const linesOf = (...specs: FitSpec[]) => [
   ...fitDistinctions(

@@ -1,22 +1,10 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import type { FitSummary } from '@shared/analysis/fit-resource';
 import type { FitSpecOf } from '@shared/analysis/fit-spec';
+import { shelfFitSpec } from '../testing/fit-spec-fixtures';
 import { FitPicker } from './fit-picker';
 
-const spec: FitSpecOf<'observed-prices'> = {
-  method: 'observed-prices',
-  filters: { flagged: 'include' },
-  weighting: null,
-  priceGrid: { from: 500, to: 4000, steps: 8 },
-  unitCost: null,
-  confidenceLevel: 0.95,
-  source: 'shelf',
-  form: 'loglog',
-  covariates: [],
-  regionEffects: false,
-  standardErrors: 'hc1',
-  instrument: 'none',
-};
+const spec = shelfFitSpec;
 const summary = (id: string, fitSpec: FitSpecOf<'observed-prices'>): FitSummary => ({
   id,
   studyId: '0a1b2c3d-4e5f-4a6b-8c7d-9e0f1a2b3c4d',

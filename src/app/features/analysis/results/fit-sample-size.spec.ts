@@ -1,23 +1,7 @@
-import type { FitSpec, FitSpecOf } from '@shared/analysis/fit-spec';
+import type { FitSpec } from '@shared/analysis/fit-spec';
+import { commonSpecFields as common, shelfFitSpec as shelf } from '../testing/fit-spec-fixtures';
 import { sampleCount, sampleSizeText } from './fit-sample-size';
 
-const common = {
-  filters: { flagged: 'include' as const },
-  weighting: null,
-  priceGrid: { from: 500, to: 4000, steps: 8 },
-  unitCost: null,
-  confidenceLevel: 0.95,
-};
-const shelf: FitSpecOf<'observed-prices'> = {
-  method: 'observed-prices',
-  ...common,
-  source: 'shelf',
-  form: 'loglog',
-  covariates: [],
-  regionEffects: false,
-  standardErrors: 'hc1',
-  instrument: 'none',
-};
 const recall: FitSpec = { ...shelf, source: 'recall' };
 const ladder: FitSpec = { method: 'price-ladder', ...common };
 
