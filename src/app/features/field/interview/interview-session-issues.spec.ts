@@ -1,15 +1,11 @@
-import { TestBed } from '@angular/core/testing';
 import type { FieldAssignments, FieldStudy } from '@shared/field-sync/field-assignments';
 import type { Block } from '@shared/questionnaire/block';
 import { starterBlock } from '@shared/questionnaire/block-starters';
-import { Session } from '../../../core/session';
-import { TypingProblems } from '../../field-blocks/typing-problems';
-import { AssignmentsCache } from '../assignments/assignments-cache';
-import { GpsReader } from '../capture/gps-reader';
-import { FieldStore } from '../data/field-store';
-import { fieldVersion, pointId, routeId, studyId, versionId } from '../testing/field-fixtures';
-import { InterviewDrafts } from './interview-drafts';
-import { InterviewSession } from './interview-session';
+import type { TypingProblems } from '../../field-blocks/typing-problems';
+import type { FieldStore } from '../data/field-store';
+import { fieldVersion, studyId } from '../testing/field-fixtures';
+import { startInterviewSession } from '../testing/interview-session-harness';
+import type { InterviewSession } from './interview-session';
 
 const blocks = [
   starterBlock('consent', 'consent'),
@@ -44,25 +40,7 @@ describe('InterviewSession and the problems it shows', () => {
   let typing: TypingProblems;
 
   beforeEach(async () => {
-    const userId = crypto.randomUUID();
-    TestBed.configureTestingModule({
-      providers: [
-        InterviewSession,
-        TypingProblems,
-        { provide: Session, useValue: { info: () => ({ user: { id: userId } }) } },
-        { provide: GpsReader, useValue: { readOnce: () => Promise.resolve({ ok: false }) } },
-        {
-          provide: AssignmentsCache,
-          useValue: { read: () => Promise.resolve({ key: 'current', payload: assignments }) },
-        },
-      ],
-    });
-    store = TestBed.inject(FieldStore);
-    typing = TestBed.inject(TypingProblems);
-    const place = { studyId, routeId, pointId, questionnaireVersionId: versionId };
-    const draftId = (await TestBed.inject(InterviewDrafts).start(place)).id;
-    session = TestBed.inject(InterviewSession);
-    await session.load(draftId);
+    ({ session, store, typing } = await startInterviewSession(assignments));
     await session.change({ agreed: true });
     expect(await session.next()).toBe('moved');
   });

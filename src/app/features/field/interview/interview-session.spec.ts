@@ -1,15 +1,10 @@
-import { TestBed } from '@angular/core/testing';
 import type { FieldAssignments } from '@shared/field-sync/field-assignments';
 import type { Block } from '@shared/questionnaire/block';
 import { starterBlock } from '@shared/questionnaire/block-starters';
-import { Session } from '../../../core/session';
-import { AssignmentsCache } from '../assignments/assignments-cache';
-import { GpsReader } from '../capture/gps-reader';
-import { FieldStore } from '../data/field-store';
-import { TypingProblems } from '../../field-blocks/typing-problems';
-import { fieldVersion, pointId, routeId, studyId, versionId } from '../testing/field-fixtures';
-import { InterviewDrafts } from './interview-drafts';
-import { InterviewSession } from './interview-session';
+import type { FieldStore } from '../data/field-store';
+import { fieldVersion } from '../testing/field-fixtures';
+import { startInterviewSession } from '../testing/interview-session-harness';
+import type { InterviewSession } from './interview-session';
 
 const blocks = [starterBlock('consent', 'consent'), starterBlock('number', 'count')] as Block[];
 const assignments = {
@@ -32,24 +27,7 @@ describe('InterviewSession and the respondent reference', () => {
   let draftId: string;
 
   beforeEach(async () => {
-    const userId = crypto.randomUUID();
-    TestBed.configureTestingModule({
-      providers: [
-        InterviewSession,
-        TypingProblems,
-        { provide: Session, useValue: { info: () => ({ user: { id: userId } }) } },
-        { provide: GpsReader, useValue: { readOnce: () => Promise.resolve({ ok: false }) } },
-        {
-          provide: AssignmentsCache,
-          useValue: { read: () => Promise.resolve({ key: 'current', payload: assignments }) },
-        },
-      ],
-    });
-    store = TestBed.inject(FieldStore);
-    const place = { studyId, routeId, pointId, questionnaireVersionId: versionId };
-    draftId = (await TestBed.inject(InterviewDrafts).start(place)).id;
-    session = TestBed.inject(InterviewSession);
-    await session.load(draftId);
+    ({ session, store, draftId } = await startInterviewSession(assignments));
   });
 
   afterEach(async () => store.db.delete());
