@@ -20,6 +20,19 @@ export const fieldSyncAccess: readonly AccessRule[] = [
     access: ['supervisor', 'researcher'],
     scope: 'study',
   },
+  {
+    method: 'GET',
+    path: '/api/studies/:studyId/review/facets',
+    access: ['supervisor', 'researcher'],
+    scope: 'study',
+  },
+  {
+    method: 'POST',
+    path: '/api/studies/:studyId/review/accept',
+    access: ['supervisor'],
+    scope: 'study',
+  },
+  { method: 'GET', path: '/api/review/pending', access: 'signed-in' },
   { method: 'GET', path: interview, access: ['supervisor', 'researcher'], scope: 'study' },
   { method: 'POST', path: `${interview}/review`, access: ['supervisor'], scope: 'study' },
 ];

@@ -1,11 +1,14 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { reviewActionSchema } from '@shared/field-sync/review-action';
-import { reviewQueueQuerySchema } from '@shared/field-sync/review-queue';
+import { bulkAcceptSchema, reviewQueueQuerySchema } from '@shared/field-sync/review-queue';
 import type { AppDependencies } from '../app-dependencies';
 import { actorOf } from '../auth/actor';
 import { validate } from '../http/validate';
+import { bulkAccept } from './bulk-accept';
 import { interviewDetail } from './interview-detail-query';
+import { pendingReviewCounts } from './pending-review-counts';
+import { reviewFacets } from './review-facets-query';
 import { reviewInterview } from './review-interview';
 import { reviewQueue } from './review-queue-query';
 
@@ -23,6 +26,21 @@ export function reviewRouter(deps: AppDependencies): Router {
     const { studyId } = validate(studyParams, req.params, 'path');
     const query = validate(reviewQueueQuerySchema, req.query, 'query');
     res.json(await reviewQueue(db, studyId, query));
+  });
+
+  router.get('/studies/:studyId/review/facets', async (req, res) => {
+    const { studyId } = validate(studyParams, req.params, 'path');
+    res.json(await reviewFacets(db, studyId));
+  });
+
+  router.post('/studies/:studyId/review/accept', async (req, res) => {
+    const { studyId } = validate(studyParams, req.params, 'path');
+    const body = validate(bulkAcceptSchema, req.body);
+    res.json(await bulkAccept(db, studyId, body, actorOf(res)));
+  });
+
+  router.get('/review/pending', async (_req, res) => {
+    res.json(await pendingReviewCounts(db, actorOf(res)));
   });
 
   router.get('/studies/:studyId/interviews/:interviewId', async (req, res) => {
