@@ -2,6 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, Injector, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import type { Role } from '@shared/auth/roles';
+import type { PendingReviewCount } from '@shared/field-sync/review-queue';
 import { withoutErrorNotice } from '../../core/error-notice-context';
 import type { HomeCountKind } from './role-welcome';
 
@@ -23,6 +24,7 @@ export class HomeCounts {
   load(roles: readonly Role[]): void {
     const has = (...wanted: Role[]) => wanted.some((role) => roles.includes(role));
     if (has('researcher', 'supervisor')) this.count('studies', this.listLength('/api/studies'));
+    if (has('supervisor')) this.count('pendingReviews', this.pendingReviews());
     if (has('client')) this.count('schedules', this.listLength('/api/portal/schedules'));
     if (has('enumerator')) this.count('routesOnDevice', this.routesOnDevice());
   }
@@ -39,6 +41,14 @@ export class HomeCounts {
       this.http.get<unknown[]>(path, { context: withoutErrorNotice() }),
     );
     return list.length;
+  }
+
+  /** Interviews waiting for a decision in every study the person supervises. */
+  private async pendingReviews(): Promise<number> {
+    const counts = await firstValueFrom(
+      this.http.get<PendingReviewCount[]>('/api/review/pending', { context: withoutErrorNotice() }),
+    );
+    return counts.reduce((sum, count) => sum + count.pending, 0);
   }
 
   /** Read from the device's store; the store's code is loaded only for enumerators. */

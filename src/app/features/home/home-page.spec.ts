@@ -63,6 +63,7 @@ describe('HomePage', () => {
       'client',
     ]);
     http.expectOne('/api/studies').flush([]);
+    http.expectOne('/api/review/pending').flush([]);
     http.expectOne('/api/portal/schedules').flush([]);
     expect(links(page)).toEqual([
       ['Go to members', '/members'],
@@ -78,11 +79,15 @@ describe('HomePage', () => {
     for (const words of stalePromises) expect(page.textContent).not.toContain(words);
   });
 
-  it('counts the studies open to a supervisor from the studies list', async () => {
+  it('counts the interviews waiting for a supervisor’s decision across their studies', async () => {
     const { page, http, settle } = await render(['supervisor']);
     http.expectOne('/api/studies').flush([{}, {}, {}]);
+    http.expectOne('/api/review/pending').flush([
+      { studyId: 'a', pending: 300, flagged: 12 },
+      { studyId: 'b', pending: 12, flagged: 0 },
+    ]);
     await settle();
-    expect(page.textContent).toContain('3 studies are open to you.');
+    expect(page.textContent).toContain('312 interviews wait for your decision.');
   });
 
   it('tells a client when nothing has been published for them', async () => {
@@ -101,7 +106,9 @@ describe('HomePage', () => {
       fetchedAt: '2026-12-01T08:00:00Z',
     });
     const fixture = TestBed.createComponent(HomePage);
-    for (let i = 0; i < 10 && !fixture.nativeElement.textContent.includes('routes are'); i++) {
+    // The device's store answers asynchronously; a busy machine may take a few seconds.
+    const deadline = Date.now() + 5000;
+    while (Date.now() < deadline && !fixture.nativeElement.textContent.includes('routes are')) {
       await new Promise((resolve) => setTimeout(resolve, 20));
       await fixture.whenStable();
     }

@@ -1,7 +1,7 @@
 import type { Role } from '@shared/auth/roles';
 
 /** A figure the home page can show beside a role, from data the app already fetches. */
-export type HomeCountKind = 'studies' | 'routesOnDevice' | 'schedules';
+export type HomeCountKind = 'studies' | 'pendingReviews' | 'routesOnDevice' | 'schedules';
 
 /** A page of the role, linked from its card. */
 export interface RoleLink {
@@ -72,11 +72,11 @@ export const roleWelcomes: Readonly<Record<Role, RoleWelcome>> = {
       { label: 'Go to the review queue', path: '/review' },
     ],
     count: {
-      of: 'studies',
+      of: 'pendingReviews',
       words: (n) =>
         n === 0
-          ? 'No study is open to you yet: a researcher adds you to one.'
-          : `${plural(n, 'study is', 'studies are')} open to you.`,
+          ? 'No interview waits for your decision.'
+          : `${plural(n, 'interview waits', 'interviews wait')} for your decision.`,
     },
   },
   enumerator: {

@@ -11,7 +11,9 @@ import {
 import { MatButton } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatIcon } from '@angular/material/icon';
-import { RouterLink } from '@angular/router';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { ActivatedRoute, RouterLink } from '@angular/router';
+import { map } from 'rxjs';
 import type { InterviewDetail } from '@shared/field-sync/interview-detail';
 import { reviewActionSchema, type ReviewAction } from '@shared/field-sync/review-action';
 import type { Study } from '@shared/studies/study';
@@ -19,6 +21,8 @@ import { readApiProblem } from '../../core/api-problem';
 import { describeAnswer } from './answer-summary';
 import { FlagDetail } from './flag-detail';
 import { PositionPlot } from './position-plot';
+import { filterFromParams, filterToParams } from './queue-filter';
+import { neighbourWindowOffset, queueNeighbours, type QueueNeighbours } from './queue-neighbours';
 import { ReviewApi } from './review-api';
 import { formatDuration, statusLabels } from './review-words';
 
@@ -38,6 +42,21 @@ const actionWords: Record<ReviewAction, string> = {
 })
 export class InterviewReviewPage {
   private readonly api = inject(ReviewApi);
+  private readonly params = toSignal(
+    inject(ActivatedRoute).queryParamMap.pipe(
+      map((paramMap) =>
+        Object.fromEntries(paramMap.keys.map((key) => [key, paramMap.get(key) ?? undefined])),
+      ),
+    ),
+    { initialValue: {} as Record<string, string | undefined> },
+  );
+  /** The queue's filter the interview was opened under, carried in the address. */
+  protected readonly filterParams = computed(() => filterToParams(filterFromParams(this.params())));
+  private readonly at = computed(() => {
+    const at = Number(this.params()['at']);
+    return Number.isInteger(at) && at >= 0 ? at : null;
+  });
+  protected readonly neighbours = signal<QueueNeighbours>({ previous: null, next: null });
 
   readonly studyId = input.required<string>();
   readonly interviewId = input.required<string>();
@@ -87,6 +106,22 @@ export class InterviewReviewPage {
         error: (error: unknown) => this.problem.set(readApiProblem(error).message),
       });
     });
+    effect(() => this.loadNeighbours(this.studyId(), this.interviewId(), this.at()));
+  }
+
+  /** The address of a neighbour in the list, under the same filter. */
+  protected neighbourParams(at: number): Record<string, string> {
+    return { ...this.filterParams(), at: String(at) };
+  }
+
+  private loadNeighbours(studyId: string, interviewId: string, at: number | null): void {
+    this.neighbours.set({ previous: null, next: null });
+    if (at === null) return;
+    const filter = filterFromParams(this.params());
+    this.api.queue(studyId, filter, neighbourWindowOffset(at), 3).subscribe({
+      next: (window) => this.neighbours.set(queueNeighbours(window.items, at, interviewId)),
+      error: () => undefined, // without neighbours the page still works; the queue link remains
+    });
   }
 
   protected decide(action: ReviewAction): void {
@@ -101,6 +136,7 @@ export class InterviewReviewPage {
       next: (detail) => {
         this.detail.set(detail);
         this.done.set(actionWords[action]);
+        this.loadNeighbours(this.studyId(), this.interviewId(), this.at());
         this.sending.set(false);
       },
       error: (error: unknown) => {

@@ -3,10 +3,15 @@ import { Injectable, inject } from '@angular/core';
 import type { Observable } from 'rxjs';
 import type { InterviewDetail } from '@shared/field-sync/interview-detail';
 import type { ReviewActionBody } from '@shared/field-sync/review-action';
-import type { ReviewQueue } from '@shared/field-sync/review-queue';
-import type { InterviewStatus } from '@shared/interviews/interview-status';
+import type {
+  BulkAcceptResult,
+  PendingReviewCount,
+  ReviewFacets,
+  ReviewQueue,
+} from '@shared/field-sync/review-queue';
 import type { Study } from '@shared/studies/study';
 import { withoutErrorNotice } from '../../core/error-notice-context';
+import { filterToParams, queuePageSize, type QueueFilter } from './queue-filter';
 
 /** The supervisor's review endpoints of a study. */
 @Injectable({ providedIn: 'root' })
@@ -21,13 +26,39 @@ export class ReviewApi {
     return this.http.get<Study>(`/api/studies/${studyId}`, { context: withoutErrorNotice() });
   }
 
-  queue(studyId: string, status: InterviewStatus | null, offset = 0): Observable<ReviewQueue> {
-    let params = new HttpParams().set('limit', 50).set('offset', offset);
-    if (status) params = params.set('status', status);
+  queue(
+    studyId: string,
+    filter: QueueFilter,
+    offset = 0,
+    limit = queuePageSize,
+  ): Observable<ReviewQueue> {
+    const params = new HttpParams({ fromObject: filterToParams(filter) })
+      .set('limit', limit)
+      .set('offset', offset);
     return this.http.get<ReviewQueue>(`/api/studies/${studyId}/review`, {
       params,
       context: withoutErrorNotice(),
     });
+  }
+
+  facets(studyId: string): Observable<ReviewFacets> {
+    return this.http.get<ReviewFacets>(`/api/studies/${studyId}/review/facets`, {
+      context: withoutErrorNotice(),
+    });
+  }
+
+  pending(): Observable<PendingReviewCount[]> {
+    return this.http.get<PendingReviewCount[]>('/api/review/pending', {
+      context: withoutErrorNotice(),
+    });
+  }
+
+  acceptSeveral(studyId: string, interviewIds: string[]): Observable<BulkAcceptResult> {
+    return this.http.post<BulkAcceptResult>(
+      `/api/studies/${studyId}/review/accept`,
+      { interviewIds },
+      { context: withoutErrorNotice() },
+    );
   }
 
   interview(studyId: string, interviewId: string): Observable<InterviewDetail> {

@@ -1,10 +1,13 @@
-import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButton } from '@angular/material/button';
 import { RouterLink } from '@angular/router';
+import { catchError, of } from 'rxjs';
 import { StudyCardList, loadStudies } from '../../shared/study-card-list';
 import { ReviewApi } from './review-api';
+import { pendingWords } from './review-words';
 
-/** The studies the supervisor reviews; one study's queue opens from here. */
+/** The studies the supervisor reviews, each with what waits for a decision there. */
 @Component({
   selector: 'app-review-studies-page',
   imports: [MatButton, RouterLink, StudyCardList],
@@ -24,12 +27,36 @@ import { ReviewApi } from './review-api';
           <a mat-flat-button [routerLink]="['/review', study.id]">
             Open the review queue<span class="fc-visually-hidden"> of {{ study.name }}</span>
           </a>
+          @if (pending(); as counts) {
+            <span class="review-studies__pending">{{ pendingText(counts, study.id) }}</span>
+          }
         </ng-template>
       </app-study-card-list>
     </div>
   `,
+  styles: `
+    .review-studies__pending {
+      color: var(--mat-sys-on-surface-variant);
+      font: var(--mat-sys-body-medium);
+    }
+  `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ReviewStudiesPage {
-  protected readonly loaded = loadStudies(inject(ReviewApi).studies());
+  private readonly api = inject(ReviewApi);
+  protected readonly loaded = loadStudies(this.api.studies());
+  private readonly counts = toSignal(this.api.pending().pipe(catchError(() => of(null))));
+  /** Counts by study; null while loading or when they could not be had (the list still works). */
+  protected readonly pending = computed(() => {
+    const counts = this.counts();
+    return counts ? new Map(counts.map((count) => [count.studyId, count])) : null;
+  });
+
+  protected pendingText(
+    counts: ReadonlyMap<string, { pending: number; flagged: number }>,
+    studyId: string,
+  ): string {
+    const count = counts.get(studyId);
+    return pendingWords(count?.pending ?? 0, count?.flagged ?? 0);
+  }
 }

@@ -1,6 +1,6 @@
 import type { QualityFlag } from '@shared/field-sync/quality/quality-flag';
 import { starterBlock } from '@shared/questionnaire/block-starters';
-import { flagDetail } from './review-words';
+import { flagDetail, pendingWords } from './review-words';
 
 const ladder = { ...starterBlock('price-ladder', 'lamp-ladder'), prompt: 'Would you buy it?' };
 const thresholds = starterBlock('price-thresholds', 'lamp-thresholds');
@@ -60,5 +60,13 @@ describe('flagDetail', () => {
     const text = flagDetail(flag, [long]);
     expect(text).toMatch(/…”$/);
     expect(text.length).toBeLessThan(120);
+  });
+});
+
+describe('pendingWords', () => {
+  it('says what waits, and how much of it was flagged', () => {
+    expect(pendingWords(0, 0)).toBe('Nothing waits for a decision.');
+    expect(pendingWords(1, 0)).toBe('1 interview waits for a decision.');
+    expect(pendingWords(312, 40)).toBe('312 interviews wait for a decision, 40 flagged.');
   });
 });

@@ -64,3 +64,12 @@ export function formatDuration(seconds: number): string {
   const rest = String(whole % 60).padStart(2, '0');
   return minutes > 0 ? `${minutes} min ${rest} s` : `${whole} s`;
 }
+
+/** What waits for a supervisor's decision in a study, in words. */
+export function pendingWords(pending: number, flagged: number): string {
+  if (pending === 0) return 'Nothing waits for a decision.';
+  const interviews = `${pending} interview${pending === 1 ? '' : 's'}`;
+  return flagged === 0
+    ? `${interviews} wait${pending === 1 ? 's' : ''} for a decision.`
+    : `${interviews} wait${pending === 1 ? 's' : ''} for a decision, ${flagged} flagged.`;
+}
