@@ -1,7 +1,6 @@
 import { EstimationError } from '../estimation-error';
 import type { StandardErrorSummary } from './linear-fit';
 import { checkLabelColumn, type LabelColumn } from './named-column';
-import { sandwichCovariance } from './sandwich-covariance';
 
 /** Which standard errors to report. */
 export type StandardErrorSpec =
@@ -11,12 +10,13 @@ export type StandardErrorSpec =
 
 /** What the covariance estimators need from a solved fit. */
 export interface CovarianceInput {
-  /** Weighted design columns that form the bread (X, or X̂ for 2SLS). */
-  readonly columns: readonly Float64Array[];
-  /** Weighted residuals (structural residuals for 2SLS). */
-  readonly residuals: Float64Array;
+  readonly n: number;
+  /** Coefficients (columns of the bread: X, or X̂ for 2SLS). */
+  readonly k: number;
   readonly inverseGram: readonly (readonly number[])[];
   readonly residualSumOfSquares: number;
+  /** The sandwich (XᵀWX)⁻¹·M·(XᵀWX)⁻¹ over clusters (rows when null), without any factor. */
+  sandwich(groups: readonly number[] | null): number[][];
 }
 
 /** The coefficient covariance and how it was made. */
@@ -35,8 +35,7 @@ export function coefficientCovariance(
   input: CovarianceInput,
   spec: StandardErrorSpec,
 ): CoefficientCovariance {
-  const n = input.residuals.length;
-  const k = input.columns.length;
+  const { n, k } = input;
   const dfResidual = n - k;
   if (spec.type === 'classical') {
     const s2 = input.residualSumOfSquares / dfResidual;
@@ -45,13 +44,13 @@ export function coefficientCovariance(
   }
   if (spec.type === 'hc1') {
     const factor = n / dfResidual;
-    const sandwich = sandwichCovariance(input.columns, input.residuals, input.inverseGram, null);
+    const sandwich = input.sandwich(null);
     const matrix = sandwich.map((row) => row.map((v) => v * factor));
     return { matrix, summary: { type: 'hc1', smallSampleFactor: factor, df: dfResidual } };
   }
   const { indices, count } = clusterIndices(spec.clusters, n);
   const factor = (count / (count - 1)) * ((n - 1) / dfResidual);
-  const sandwich = sandwichCovariance(input.columns, input.residuals, input.inverseGram, indices);
+  const sandwich = input.sandwich(indices);
   return {
     matrix: sandwich.map((row) => row.map((v) => v * factor)),
     summary: {

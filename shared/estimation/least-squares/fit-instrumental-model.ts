@@ -49,15 +49,26 @@ export function fitInstrumentalModel(spec: InstrumentalModelSpec): InstrumentalF
   const fitted = structural.columns.map((column, j) =>
     j < firstEndogenous ? column : firstStages[j - firstEndogenous].fitted,
   );
-  const second = solveLeastSquares(fitted, structural.response, structural.names, maxCondition);
-  const residuals = structuralResiduals(structural, second.coefficients);
+  const instruments = buildWeightedDesign({
+    response: spec.response,
+    regressors: [...spec.exogenous, ...spec.instruments],
+    intercept,
+    weights: spec.weights,
+  }).raw.columns;
+  const second = solveLeastSquares(fitted, structural.response, structural.names, maxCondition, {
+    ...structural.raw,
+    instruments,
+  });
+  // The exact path's residuals and RSS are already the structural ones.
+  const residuals = second.exact
+    ? second.residuals
+    : structuralResiduals(structural, second.coefficients);
   const rss = new CompensatedSum();
   for (const u of residuals) rss.addProduct(u, u);
   const fit = assembleFit(structural, {
     coefficients: second.coefficients,
-    residuals,
-    residualSumOfSquares: rss.value(),
-    breadColumns: fitted,
+    residualSumOfSquares: second.exact ? second.residualSumOfSquares : rss.value(),
+    sandwich: (groups) => second.sandwich(groups, residuals),
     inverseGram: second.inverseGram,
     conditionNumber: second.conditionNumber,
     standardErrors,
@@ -104,10 +115,22 @@ function firstStage(
     intercept,
     weights: spec.weights,
   });
-  const solution = solveLeastSquares(design.columns, design.response, design.names, maxCondition);
+  const solution = solveLeastSquares(
+    design.columns,
+    design.response,
+    design.names,
+    maxCondition,
+    design.raw,
+  );
   const fitted = design.response.map((value, i) => value - solution.residuals[i]);
   const covariance = coefficientCovariance(
-    { ...solution, columns: design.columns },
+    {
+      n: design.n,
+      k: design.names.length,
+      inverseGram: solution.inverseGram,
+      residualSumOfSquares: solution.residualSumOfSquares,
+      sandwich: (groups) => solution.sandwich(groups, solution.residuals),
+    },
     standardErrors,
   );
   const k = design.names.length;

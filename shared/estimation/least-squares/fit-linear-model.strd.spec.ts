@@ -4,13 +4,17 @@ import {
   STRD_SET_NAMES,
   strdRegressors,
 } from '../../../tests/fixtures/strd/load-strd-set';
-import { EstimationError } from '../estimation-error';
 import { fitLinearModel } from './fit-linear-model';
 
 // Expected values: NIST StRD linear least squares, certified values (published, 15 digits),
-// copied to tests/fixtures/strd. Bar: at least 9 matching significant digits (LRE ≥ 9).
+// copied to tests/fixtures/strd. Bar: at least 9 matching significant digits (LRE ≥ 9), and 7
+// for Filip: its x, given to 10 digits, is stored as the nearest float64 and its powers x²…x¹⁰
+// rounded again, and on a design this ill-conditioned (scaled condition number ≈ 5.5e9) those
+// roundings alone move the exact least-squares fit of the stored data in the 8th digit.
 const REQUIRED_DIGITS = 9;
-const accepted = STRD_SET_NAMES.filter((name) => name !== 'Filip');
+const FILIP_DIGITS = 7;
+const accepted = [...STRD_SET_NAMES];
+const required = (name: string) => (name === 'Filip' ? FILIP_DIGITS : REQUIRED_DIGITS);
 const reached: Record<string, Record<string, string>> = {};
 
 function fitSet(name: string) {
@@ -43,8 +47,8 @@ describe('fitLinearModel on the NIST StRD linear sets', () => {
     );
     reached[name] = { beta: beta.toFixed(1), se: se.toFixed(1) };
     expect(fit.coefficients).toHaveLength(set.parameters);
-    expect(beta).toBeGreaterThanOrEqual(REQUIRED_DIGITS); // NIST StRD certified coefficients
-    expect(se).toBeGreaterThanOrEqual(REQUIRED_DIGITS); // NIST StRD certified standard errors
+    expect(beta).toBeGreaterThanOrEqual(required(name)); // NIST StRD certified coefficients
+    expect(se).toBeGreaterThanOrEqual(required(name)); // NIST StRD certified standard errors
   });
 
   it.each(accepted)('matches the certified residual SD, R² and F of %s', (name) => {
@@ -52,12 +56,12 @@ describe('fitLinearModel on the NIST StRD linear sets', () => {
     const rsd = logRelativeError(fit.residualSD, set.certified.residualSD);
     const r2 = logRelativeError(fit.rSquared, set.certified.rSquared);
     Object.assign((reached[name] ??= {}), { residualSD: rsd.toFixed(1), rSquared: r2.toFixed(1) });
-    expect(rsd).toBeGreaterThanOrEqual(REQUIRED_DIGITS); // NIST StRD certified residual SD
-    expect(r2).toBeGreaterThanOrEqual(REQUIRED_DIGITS); // NIST StRD certified R² (uncentred for NoInt)
+    expect(rsd).toBeGreaterThanOrEqual(required(name)); // NIST StRD certified residual SD
+    expect(r2).toBeGreaterThanOrEqual(required(name)); // NIST StRD certified R² (uncentred for NoInt)
     if (set.certified.anova && fit.fStatistic !== null) {
       // NIST StRD certified ANOVA F
       expect(logRelativeError(fit.fStatistic, set.certified.anova.F)).toBeGreaterThanOrEqual(
-        REQUIRED_DIGITS,
+        required(name),
       );
     }
   });
@@ -74,20 +78,11 @@ describe('fitLinearModel on the NIST StRD linear sets', () => {
     expect(fit.residualSD).toBeLessThan(1e-9);
   });
 
-  it('refuses Filip as ill-conditioned rather than returning digits it cannot trust', () => {
-    // NIST StRD Filip: x^1..x^10 built in float64 carry too little information (scaled condition
-    // number ≈ 5e9); a float64 QR reaches only 7–8 digits (CHECKS.md §1).
-    let error: unknown;
-    try {
-      fitSet('Filip');
-    } catch (caught) {
-      error = caught;
-    }
-    expect(error).toBeInstanceOf(EstimationError);
-    expect((error as EstimationError).code).toBe('ill-conditioned');
-    expect((error as EstimationError).message).toMatch(/condition number 5\.\d+e\+9/);
-    reached['Filip'] = {
-      result: "refused: EstimationError 'ill-conditioned' (scaled condition number ≈ 5.5e9)",
-    };
+  it('fits Filip exactly from its stored float64 data instead of refusing it', () => {
+    // NIST StRD Filip: scaled condition number ≈ 5.5e9, above the float64 QR's limit of 1e8;
+    // the design is small, so the engine solves it in exact rational arithmetic.
+    const { fit } = fitSet('Filip');
+    expect(fit.conditionNumber).toBeGreaterThan(1e9);
+    expect(fit.coefficients).toHaveLength(11);
   });
 });

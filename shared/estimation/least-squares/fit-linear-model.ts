@@ -42,12 +42,12 @@ export function fitLinearModel(spec: LinearModelSpec): LinearFit {
     design.response,
     design.names,
     spec.maxConditionNumber ?? DEFAULT_MAX_CONDITION_NUMBER,
+    design.raw,
   );
   return assembleFit(design, {
     coefficients: solution.coefficients,
-    residuals: solution.residuals,
     residualSumOfSquares: solution.residualSumOfSquares,
-    breadColumns: design.columns,
+    sandwich: (groups) => solution.sandwich(groups, solution.residuals),
     inverseGram: solution.inverseGram,
     conditionNumber: solution.conditionNumber,
     standardErrors: spec.standardErrors ?? { type: 'classical' },
@@ -59,9 +59,9 @@ export function fitLinearModel(spec: LinearModelSpec): LinearFit {
 /** The pieces of a solved fit that the report is assembled from (shared with 2SLS). */
 export interface SolvedFit {
   readonly coefficients: ArrayLike<number>;
-  readonly residuals: Float64Array;
   readonly residualSumOfSquares: number;
-  readonly breadColumns: readonly Float64Array[];
+  /** The robust sandwich without its factor (see LeastSquaresSolution.sandwich). */
+  sandwich(groups: readonly number[] | null): number[][];
   readonly inverseGram: readonly (readonly number[])[];
   readonly conditionNumber: number;
   readonly standardErrors: StandardErrorSpec;
@@ -75,7 +75,13 @@ export interface SolvedFit {
 export function assembleFit(design: WeightedDesign, solved: SolvedFit): LinearFit {
   checkConfidenceLevel(solved.confidenceLevel);
   const covariance = coefficientCovariance(
-    { ...solved, columns: solved.breadColumns },
+    {
+      n: design.n,
+      k: design.names.length,
+      inverseGram: solved.inverseGram,
+      residualSumOfSquares: solved.residualSumOfSquares,
+      sandwich: (groups) => solved.sandwich(groups),
+    },
     solved.standardErrors,
   );
   const df = covariance.summary.df;

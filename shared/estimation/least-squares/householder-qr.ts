@@ -38,6 +38,19 @@ export class HouseholderQr {
     for (let j = this.cols - 1; j >= 0; j--) this.reflect(j, v);
   }
 
+  /**
+   * The k orthonormal columns of Q₁ (A = Q₁·R), formed by applying the reflectors to unit
+   * vectors: orthonormal to rounding level however ill-conditioned A is.
+   */
+  thinQ(): Float64Array[] {
+    return Array.from({ length: this.cols }, (_, j) => {
+      const column = new Float64Array(this.rows);
+      column[j] = 1;
+      this.applyQ(column);
+      return column;
+    });
+  }
+
   /** Solves R·x = c (c has k entries) by back substitution. */
   solveR(c: ArrayLike<number>): Float64Array {
     const x = Float64Array.from({ length: this.cols }, (_, i) => c[i]);

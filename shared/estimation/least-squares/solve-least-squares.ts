@@ -1,7 +1,10 @@
 import { EstimationError } from '../estimation-error';
 import { CompensatedSum } from './compensated-dot';
+import { exactInstrumental } from './exact-instrumental';
+import { exactLeastSquares, exactPathFits, type RawDesign } from './exact-least-squares';
 import { HouseholderQr } from './householder-qr';
 import { refineLeastSquares } from './refine-least-squares';
+import { orthogonalSandwich } from './sandwich-covariance';
 
 /** The numerical core of a least-squares fit. */
 export interface LeastSquaresSolution {
@@ -15,24 +18,47 @@ export interface LeastSquaresSolution {
   readonly inverseGram: number[][];
   /** Frobenius condition number of X after scaling every column to unit length (≈ power of 2). */
   readonly conditionNumber: number;
+  /** Solved in exact rational arithmetic (see exactLeastSquares) rather than float64 QR. */
+  readonly exact: boolean;
+  /**
+   * The robust sandwich (XᵀWX)⁻¹·M·(XᵀWX)⁻¹ over `groups` (rows when null). The float64 path
+   * sums M from the given weighted residuals in the orthogonal basis of its QR; the exact path
+   * sums it exactly from its own exact residuals (the structural ones under 2SLS) and ignores
+   * them.
+   */
+  sandwich(groups: readonly number[] | null, weightedResiduals: Float64Array): number[][];
 }
 
-/** Default refusal threshold: beyond it fewer than about 8 significant digits are trustworthy. */
+/**
+ * Default refusal threshold for designs too large for the exact path: beyond it a float64 QR
+ * keeps fewer than about 8 significant digits.
+ */
 export const DEFAULT_MAX_CONDITION_NUMBER = 1e8;
 
 /**
- * Least squares on float64 columns: columns are scaled by powers of two (exact, so the scaled
- * problem is the same problem), factorised by Householder QR, checked for rank and
- * conditioning, and the solution refined with double-double residuals.
+ * Above this scaled condition number a float64 QR would lose more than about 4 of its 16
+ * digits (and its robust errors as many), so designs small enough are solved exactly instead.
+ */
+export const EXACT_ABOVE_CONDITION_NUMBER = 1e4;
+
+/**
+ * Least squares on float64 columns (weighted: each row times √wᵢ; under 2SLS the fitted X̂):
+ * columns are scaled by powers of two (exact, so the scaled problem is the same problem),
+ * factorised by Householder QR and checked for rank and conditioning. Up to a scaled condition
+ * number of 1e4, or when the design is too large for exact arithmetic, the QR solution is
+ * refined with double-double residuals; above it, designs small enough (`exactPathFits`) are
+ * solved exactly from `raw` — the data unweighted, the weights and instruments apart (default:
+ * the columns as given) — so no digit depends on the conditioning.
  * Throws 'singular-design' naming the first column that depends on the ones before it, and
- * 'ill-conditioned' when the scaled condition number exceeds `maxConditionNumber` — data stored
- * as float64 then carry too little information to pin the coefficients down.
+ * 'ill-conditioned' when a design too large for the exact path has a scaled condition number
+ * above `maxConditionNumber` — float64 QR then pins too few digits of the coefficients down.
  */
 export function solveLeastSquares(
   columns: readonly Float64Array[],
   y: Float64Array,
   names: readonly string[],
   maxConditionNumber = DEFAULT_MAX_CONDITION_NUMBER,
+  raw: RawDesign = { columns, response: y, weights: null },
 ): LeastSquaresSolution {
   const scales = columns.map((column, j) => powerOfTwoNorm(column, names[j]));
   const scaled = columns.map((column, j) => column.map((value) => value / scales[j]));
@@ -40,6 +66,10 @@ export function solveLeastSquares(
   checkRank(qr, names);
   const rInverse = invertR(qr);
   const conditionNumber = frobenius(qr) * frobeniusOfRows(rInverse);
+  const width = columns.length + (raw.instruments?.length ?? 0);
+  if (conditionNumber > EXACT_ABOVE_CONDITION_NUMBER && exactPathFits(y.length, width)) {
+    return exactSolution(raw, names, conditionNumber);
+  }
   if (!(conditionNumber <= maxConditionNumber)) {
     throw new EstimationError(
       'ill-conditioned',
@@ -52,12 +82,39 @@ export function solveLeastSquares(
   const coefficients = refined.solution.map((z, j) => z / scales[j]);
   const rss = new CompensatedSum();
   for (const r of refined.residuals) rss.addProduct(r, r);
+  // C = D⁻¹R⁻¹, the factor of the sandwich in the orthogonal basis of X.
+  const factor = rInverse.map((row, i) => Array.from(row, (value) => value / scales[i]));
+  let q: Float64Array[] | null = null;
   return {
     coefficients,
     residuals: refined.residuals,
     residualSumOfSquares: rss.value(),
     inverseGram: inverseGram(rInverse, scales),
     conditionNumber,
+    exact: false,
+    sandwich: (groups, weightedResiduals) =>
+      orthogonalSandwich((q ??= qr.thinQ()), factor, weightedResiduals, groups),
+  };
+}
+
+/** The exact fit, its residuals weighted like the float path's (√wᵢ·eᵢ). */
+function exactSolution(
+  raw: RawDesign,
+  names: readonly string[],
+  conditionNumber: number,
+): LeastSquaresSolution {
+  const solved = raw.instruments ? exactInstrumental(raw, names) : exactLeastSquares(raw, names);
+  const rootWeights = raw.weights?.map(Math.sqrt);
+  return {
+    coefficients: solved.coefficients,
+    residuals: rootWeights
+      ? solved.rawResiduals.map((r, i) => r * rootWeights[i])
+      : solved.rawResiduals,
+    residualSumOfSquares: solved.residualSumOfSquares,
+    inverseGram: solved.inverseGram,
+    conditionNumber,
+    exact: true,
+    sandwich: (groups) => solved.sandwich(groups),
   };
 }
 

@@ -1,4 +1,5 @@
 import { EstimationError } from '../estimation-error';
+import type { RawDesign } from './exact-least-squares';
 import { finiteColumn, type NamedColumn } from './named-column';
 
 /** The term name of the constant column. */
@@ -16,6 +17,8 @@ export interface WeightedDesign {
   /** √wᵢ per row, or null for an unweighted fit. */
   readonly rootWeights: Float64Array | null;
   readonly intercept: boolean;
+  /** The same design unweighted, with the weights apart (for exact arithmetic). */
+  readonly raw: RawDesign;
 }
 
 /** What a design is built from. */
@@ -51,14 +54,22 @@ export function buildWeightedDesign(input: DesignInput): WeightedDesign {
       input.response.name,
     );
   }
-  const rootWeights = input.weights ? positiveRootWeights(input.weights, n) : null;
+  const weights = input.weights ? positiveWeights(input.weights, n) : null;
+  const rootWeights = weights ? weights.map(Math.sqrt) : null;
   const weigh = (values: Float64Array): Float64Array =>
     rootWeights ? values.map((v, i) => v * rootWeights[i]) : values;
-  const columns = input.regressors.map((column) => weigh(finiteColumn(column, n)));
-  if (input.intercept)
-    columns.unshift(rootWeights ? Float64Array.from(rootWeights) : new Float64Array(n).fill(1));
-  const response = weigh(finiteColumn(input.response, n));
-  return { n, names, columns, response, rootWeights, intercept: input.intercept };
+  const rawColumns = input.regressors.map((column) => finiteColumn(column, n));
+  if (input.intercept) rawColumns.unshift(new Float64Array(n).fill(1));
+  const rawResponse = finiteColumn(input.response, n);
+  return {
+    n,
+    names,
+    columns: rawColumns.map(weigh),
+    response: weigh(rawResponse),
+    rootWeights,
+    intercept: input.intercept,
+    raw: { columns: rawColumns, response: rawResponse, weights },
+  };
 }
 
 function checkNames(names: readonly string[], response: string): void {
@@ -75,9 +86,9 @@ function checkNames(names: readonly string[], response: string): void {
   }
 }
 
-function positiveRootWeights(weights: NamedColumn, n: number): Float64Array {
+function positiveWeights(weights: NamedColumn, n: number): Float64Array {
   const values = finiteColumn(weights, n);
-  return values.map((w, i) => {
+  values.forEach((w, i) => {
     if (!(w > 0)) {
       throw new EstimationError(
         'invalid-value',
@@ -85,6 +96,6 @@ function positiveRootWeights(weights: NamedColumn, n: number): Float64Array {
         weights.name,
       );
     }
-    return Math.sqrt(w);
   });
+  return values;
 }

@@ -1,4 +1,5 @@
 import { EstimationError } from '../estimation-error';
+import { CompensatedSum } from '../least-squares/compensated-dot';
 import { assertLogitOverlap } from './logit-overlap';
 import { maximiseLogLikelihood, type LogLikelihoodPoint } from './newton-maximiser';
 
@@ -51,7 +52,7 @@ export function fitBinomialLogit(data: BinomialLogitData, field = 'x'): Binomial
   const ybar = y.reduce((s, v, i) => s + w[i] * v, 0) / w.reduce((s, v) => s + v, 0);
   const fit = maximiseLogLikelihood(evaluate, [Math.log(ybar / (1 - ybar)), 0], field);
   const [intercept, slope] = fit.params;
-  const robust = clusterSandwich(data, w, intercept, slope, fit.inverseInformation);
+  const robust = clusterSandwich(data, w, intercept, slope);
   return {
     intercept,
     slope,
@@ -92,37 +93,78 @@ function logitLogLikelihood(
   return { value, gradient: g, hessian: h };
 }
 
+/**
+ * The cluster-robust sandwich, formed about the information-weighted mean price m: in the
+ * coordinates (a + b·m, b) the information matrix is diagonal up to rounding, so the bread
+ * inverts without loss and the meat's roundings are not amplified by the conditioning that
+ * prices far from zero give [1, x]; the result is carried back by A·V·Aᵀ, A = [[1, −m], [0, 1]].
+ * `bread` (the Newton step's inverse information) is not used for that reason. Sums are
+ * accumulated in double-double.
+ */
 function clusterSandwich(
   data: BinomialLogitData,
   w: readonly number[],
   a: number,
   b: number,
-  bread: number[][],
 ): { covariance: number[][]; clusters: number } {
-  const scores = new Map<string | number, [number, number]>();
-  data.x.forEach((xi, i) => {
+  const p = data.x.map((xi) => logistic(a + b * xi));
+  const information = new CompensatedSum();
+  const moment = new CompensatedSum();
+  p.forEach((pi, i) => {
+    const v = w[i] * pi * (1 - pi);
+    information.add(v);
+    moment.addProduct(v, data.x[i]);
+  });
+  const m = moment.value() / information.value();
+  const c = data.x.map((xi) => xi - m);
+  const h = [new CompensatedSum(), new CompensatedSum(), new CompensatedSum()];
+  const scores = new Map<string | number, [CompensatedSum, CompensatedSum]>();
+  p.forEach((pi, i) => {
+    const v = w[i] * pi * (1 - pi);
+    h[0].add(v);
+    h[1].addProduct(v, c[i]);
+    h[2].addProduct(v * c[i], c[i]);
     const key = data.clusters?.[i] ?? i;
-    const r = w[i] * (data.y[i] - logistic(a + b * xi));
-    const s = scores.get(key) ?? [0, 0];
-    scores.set(key, [s[0] + r, s[1] + r * xi]);
+    const r = w[i] * (data.y[i] - pi);
+    let score = scores.get(key);
+    if (!score) scores.set(key, (score = [new CompensatedSum(), new CompensatedSum()]));
+    score[0].add(r);
+    score[1].addProduct(r, c[i]);
   });
   const g = scores.size;
   if (g < 2)
     throw new EstimationError('too-few-observations', 'need at least two clusters', 'respondent');
-  const meat = [
-    [0, 0],
-    [0, 0],
-  ];
+  const meat = [new CompensatedSum(), new CompensatedSum(), new CompensatedSum()];
   for (const [s0, s1] of scores.values()) {
-    meat[0][0] += s0 * s0;
-    meat[0][1] += s0 * s1;
-    meat[1][1] += s1 * s1;
+    const [t0, t1] = [s0.value(), s1.value()];
+    meat[0].addProduct(t0, t0);
+    meat[1].addProduct(t0, t1);
+    meat[2].addProduct(t1, t1);
   }
-  meat[1][0] = meat[0][1];
+  const [h00, h01, h11] = h.map((sum) => sum.value());
+  const det = h00 * h11 - h01 * h01;
+  const bread = [
+    [h11 / det, -h01 / det],
+    [-h01 / det, h00 / det],
+  ];
+  const [m00, m01, m11] = meat.map((sum) => sum.value());
+  const mm = [
+    [m00, m01],
+    [m01, m11],
+  ];
+  const centred = multiply(multiply(bread, mm), bread);
+  const back = [
+    [1, -m],
+    [0, 1],
+  ];
   const factor = g / (g - 1);
-  const bm = bread.map((row) => [0, 1].map((j) => row[0] * meat[0][j] + row[1] * meat[1][j]));
-  const covariance = bm.map((row) =>
-    [0, 1].map((j) => factor * (row[0] * bread[0][j] + row[1] * bread[1][j])),
-  );
+  const covariance = multiply(multiply(back, centred), [
+    [1, 0],
+    [-m, 1],
+  ]).map((row) => row.map((v) => v * factor));
   return { covariance, clusters: g };
+}
+
+function multiply(x: number[][], y: number[][]): number[][] {
+  return [0, 1].map((i) => [0, 1].map((j) => x[i][0] * y[0][j] + x[i][1] * y[1][j]));
 }
