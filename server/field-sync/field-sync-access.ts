@@ -21,5 +21,11 @@ export const fieldSyncAccess: readonly AccessRule[] = [
     scope: 'study',
   },
   { method: 'GET', path: interview, access: ['supervisor', 'researcher'], scope: 'study' },
+  {
+    method: 'GET',
+    path: `${interview}/photos/:photoId`,
+    access: ['supervisor', 'researcher'],
+    scope: 'study',
+  },
   { method: 'POST', path: `${interview}/review`, access: ['supervisor'], scope: 'study' },
 ];

@@ -6,6 +6,7 @@ import type { AppDependencies } from '../app-dependencies';
 import { actorOf } from '../auth/actor';
 import { validate } from '../http/validate';
 import { interviewDetail } from './interview-detail-query';
+import { streamInterviewPhoto } from './photo-stream';
 import { reviewInterview } from './review-interview';
 import { reviewQueue } from './review-queue-query';
 
@@ -13,6 +14,8 @@ const studyParams = z.object({ studyId: z.uuid('The study id must be a UUID') })
 const interviewParams = studyParams.extend({
   interviewId: z.uuid('The interview id must be a UUID'),
 });
+
+const photoParams = interviewParams.extend({ photoId: z.uuid('The photo id must be a UUID') });
 
 /** The supervisor's review of a study's interviews; the access policy says who may call. */
 export function reviewRouter(deps: AppDependencies): Router {
@@ -28,14 +31,19 @@ export function reviewRouter(deps: AppDependencies): Router {
   router.get('/studies/:studyId/interviews/:interviewId', async (req, res) => {
     const { studyId, interviewId } = validate(interviewParams, req.params, 'path');
     res.setHeader('Cache-Control', 'no-store');
-    res.json(await interviewDetail(db, storage, studyId, interviewId));
+    res.json(await interviewDetail(db, studyId, interviewId));
+  });
+
+  router.get('/studies/:studyId/interviews/:interviewId/photos/:photoId', async (req, res) => {
+    const where = validate(photoParams, req.params, 'path');
+    await streamInterviewPhoto(db, storage, where, res);
   });
 
   router.post('/studies/:studyId/interviews/:interviewId/review', async (req, res) => {
     const { studyId, interviewId } = validate(interviewParams, req.params, 'path');
     const body = validate(reviewActionSchema, req.body);
     await reviewInterview(db, studyId, interviewId, body, actorOf(res));
-    res.json(await interviewDetail(db, storage, studyId, interviewId));
+    res.json(await interviewDetail(db, studyId, interviewId));
   });
 
   return router;
