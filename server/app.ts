@@ -8,6 +8,8 @@ import { loadActor } from './auth/load-actor';
 import './auth/session-data';
 import { healthRouter } from './health/health-router';
 import { apiNotFound, errorHandler } from './http/error-handler';
+import { noStore } from './http/no-store';
+import { requestLogger } from './http/request-logger';
 import { securityHeaders } from './http/security-headers';
 import { sessionMiddleware } from './http/session-middleware';
 import { staticApp } from './http/static-app';
@@ -33,6 +35,8 @@ export function createApp(deps: AppDependencies) {
   app.use('/auth', express.urlencoded({ extended: false, limit: '4kb' }), authRouter(deps));
 
   const api = express.Router();
+  api.use(requestLogger);
+  api.use(noStore);
   // A sync batch may pass 1 MB; its own parser runs first (the next one skips a parsed body).
   api.use('/field/sync', syncBodyParser);
   api.use(express.json({ limit: '1mb' }));

@@ -2,6 +2,7 @@ import { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import type pg from 'pg';
 import { from as copyFrom } from 'pg-copy-streams';
+import { sqlStateOf } from './database-refusal';
 import type { InterviewInsert, PhotoInsert } from './interview-row';
 
 /** The columns COPY fills, in the order each line lists them. */
@@ -63,16 +64,14 @@ export function interviewCopyText(rows: readonly InterviewInsert[]): string {
   return text;
 }
 
-/** SQLSTATE of a unique violation: an id stored meanwhile by another request. */
-const uniqueViolation = '23505';
-
 /**
  * Stores new interviews (and the photo rows they declare) with one `COPY`, the cheapest way
  * into PostgreSQL: parsing JSON parameters costs the database more than storing the rows. COPY
  * has no ON CONFLICT, so this is the optimistic path for ids nobody stored yet (the batch was
- * checked against the table just before): it answers null, having stored nothing, when an id
- * turned out to be taken — a concurrent request got there first — and the caller then takes the
- * INSERT … ON CONFLICT path that judges each id. Photos go in the same transaction.
+ * checked against the table just before): it answers null, having stored nothing, when
+ * PostgreSQL refused the rows — an id turned out to be taken (a concurrent request got there
+ * first), or a value it cannot store slipped past the checks — and the caller then takes the
+ * INSERT … ON CONFLICT path that judges each id and each row. Photos go in the same transaction.
  */
 export async function copyInterviewRows(
   pool: pg.Pool,
@@ -100,7 +99,7 @@ export async function copyInterviewRows(
     return rows.map((row) => row.id);
   } catch (error) {
     if (transaction) await client.query('ROLLBACK').catch(() => undefined);
-    if ((error as { code?: string }).code === uniqueViolation) return null;
+    if (sqlStateOf(error) !== null) return null;
     throw error;
   } finally {
     client.release();

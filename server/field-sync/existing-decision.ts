@@ -2,6 +2,9 @@ import type { InterviewStatus } from '@shared/interviews/interview-status';
 import type { ExistingInterview } from './existing-interviews';
 import { rejection, type Rejection } from './sync-rejection';
 
+const takenMessage =
+  'This id is already stored with different content; it is not overwritten — make a new id on the device';
+
 /** What to do with a synced interview whose id is already stored. */
 export type ExistingDecision =
   | { kind: 'duplicate'; status: InterviewStatus }
@@ -13,6 +16,9 @@ export type ExistingDecision =
  * takes its enumerator's corrected submission — one whose content differs, or which names the
  * return it answers (`returnedAt`), so unchanged answers can be confirmed. The same content
  * again is a duplicate; anything else reusing the id is refused as an id conflict.
+ *
+ * An id held by another enumerator's interview is answered word for word like any other
+ * conflict, so a device cannot learn from the answer that someone else's interview exists.
  */
 export function decideOnExisting(
   existing: ExistingInterview,
@@ -26,7 +32,7 @@ export function decideOnExisting(
     existing.enumeratorId !== submission.enumeratorId ||
     existing.studyId !== submission.studyId
   ) {
-    return conflict('Another enumerator’s interview has this id; make a new id on the device');
+    return conflict(takenMessage);
   }
   const same = existing.fingerprint === submission.fingerprint;
   const answersReturn =
@@ -38,6 +44,6 @@ export function decideOnExisting(
   return conflict(
     existing.status === 'returned'
       ? 'This interview was returned; send the correction with the same id'
-      : `This id is already stored (${existing.status}) with different content; it is not overwritten`,
+      : takenMessage,
   );
 }

@@ -34,5 +34,11 @@ export const fieldSyncAccess: readonly AccessRule[] = [
   },
   { method: 'GET', path: '/api/review/pending', access: 'signed-in' },
   { method: 'GET', path: interview, access: ['supervisor', 'researcher'], scope: 'study' },
+  {
+    method: 'GET',
+    path: `${interview}/photos/:photoId`,
+    access: ['supervisor', 'researcher'],
+    scope: 'study',
+  },
   { method: 'POST', path: `${interview}/review`, access: ['supervisor'], scope: 'study' },
 ];

@@ -12,7 +12,6 @@ import {
   users,
 } from '../db/schema';
 import { notFound } from '../http/http-error';
-import type { ObjectStorage } from '../storage/object-storage';
 import { interviewPhotoLinks } from './photo-links';
 import { reviewJoins, reviewQueueColumns, toQueueItem } from './review-columns';
 
@@ -21,7 +20,6 @@ const reviewer = alias(users, 'reviewer');
 /** One interview of the study for review, or 404 when the study has no such interview. */
 export async function interviewDetail(
   db: Executor,
-  storage: ObjectStorage,
   studyId: string,
   interviewId: string,
 ): Promise<InterviewDetail> {
@@ -65,7 +63,7 @@ export async function interviewDetail(
       row.pointLatitude !== null && row.pointLongitude !== null
         ? { latitude: row.pointLatitude, longitude: row.pointLongitude }
         : null,
-    photos: await interviewPhotoLinks(db, storage, interview.id),
+    photos: await interviewPhotoLinks(db, studyId, interview.id),
     reviewNote: interview.reviewNote,
     reviewerName: row.reviewerName,
   };

@@ -8,6 +8,7 @@ import { validate } from '../http/validate';
 import { bulkAccept } from './bulk-accept';
 import { interviewDetail } from './interview-detail-query';
 import { pendingReviewCounts } from './pending-review-counts';
+import { streamInterviewPhoto } from './photo-stream';
 import { reviewFacets } from './review-facets-query';
 import { reviewInterview } from './review-interview';
 import { reviewQueue } from './review-queue-query';
@@ -16,6 +17,8 @@ const studyParams = z.object({ studyId: z.uuid('The study id must be a UUID') })
 const interviewParams = studyParams.extend({
   interviewId: z.uuid('The interview id must be a UUID'),
 });
+
+const photoParams = interviewParams.extend({ photoId: z.uuid('The photo id must be a UUID') });
 
 /** The supervisor's review of a study's interviews; the access policy says who may call. */
 export function reviewRouter(deps: AppDependencies): Router {
@@ -46,14 +49,19 @@ export function reviewRouter(deps: AppDependencies): Router {
   router.get('/studies/:studyId/interviews/:interviewId', async (req, res) => {
     const { studyId, interviewId } = validate(interviewParams, req.params, 'path');
     res.setHeader('Cache-Control', 'no-store');
-    res.json(await interviewDetail(db, storage, studyId, interviewId));
+    res.json(await interviewDetail(db, studyId, interviewId));
+  });
+
+  router.get('/studies/:studyId/interviews/:interviewId/photos/:photoId', async (req, res) => {
+    const where = validate(photoParams, req.params, 'path');
+    await streamInterviewPhoto(db, storage, where, res);
   });
 
   router.post('/studies/:studyId/interviews/:interviewId/review', async (req, res) => {
     const { studyId, interviewId } = validate(interviewParams, req.params, 'path');
     const body = validate(reviewActionSchema, req.body);
     await reviewInterview(db, studyId, interviewId, body, actorOf(res));
-    res.json(await interviewDetail(db, storage, studyId, interviewId));
+    res.json(await interviewDetail(db, studyId, interviewId));
   });
 
   return router;

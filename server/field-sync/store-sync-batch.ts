@@ -3,19 +3,21 @@ import type { InterviewStatus } from '@shared/interviews/interview-status';
 import type { Executor } from '../db/database';
 import { decideOnExisting } from './existing-decision';
 import { loadExistingInterviews } from './existing-interviews';
+import type { NewRowsOutcome } from './insert-item-by-item';
 import type { InterviewInsert, PhotoInsert } from './interview-row';
 import { resubmit } from './resubmit-interview';
 import type { PlannedItem, StoredItem as Stored } from './plan-sync-batch';
 import { rejection, type Rejection } from './sync-rejection';
 
 /**
- * Stores new interviews and the photo rows they declare, atomically; answers the ids it stored.
- * An id a concurrent request stored first is left out of the answer (and not written).
+ * Stores new interviews and the photo rows they declare; answers the ids it stored and those the
+ * database refused (each alone, never the batch). An id a concurrent request stored first is
+ * in neither list (and not written).
  */
 export type NewRowWriter = (
   rows: readonly InterviewInsert[],
   photos: readonly PhotoInsert[],
-) => Promise<string[]>;
+) => Promise<NewRowsOutcome>;
 
 /**
  * Writes a planned batch and answers each item. New interviews go in through `writeNew` in one
@@ -30,7 +32,7 @@ export async function storeSyncBatch(
   writeNew: NewRowWriter,
 ): Promise<SyncItemResult[]> {
   const inserts = plan.filter((item): item is Stored => item.kind === 'insert');
-  const lost = await insertNew(writeNew, inserts);
+  const { lost, refused } = await insertNew(writeNew, inserts);
   const lostDecisions = await judgeLost(tx, lost, enumeratorId);
   const results: SyncItemResult[] = [];
   for (const item of plan) {
@@ -39,6 +41,8 @@ export async function storeSyncBatch(
       results.push({ index, id: item.id, outcome: 'rejected', ...item.rejection });
     } else if (item.kind === 'duplicate') {
       results.push({ index, id: item.id, outcome: 'duplicate', status: item.status });
+    } else if (refused.has(item.id)) {
+      results.push({ index, id: item.id, outcome: 'rejected', ...refused.get(item.id)! });
     } else if (lostDecisions.has(item.id)) {
       results.push(withPlace(lostDecisions.get(item.id), index, item.id));
     } else {
@@ -57,13 +61,21 @@ export async function storeSyncBatch(
   return results;
 }
 
-/** Inserts the new interviews and their photo rows; answers the ones someone stored first. */
-async function insertNew(writeNew: NewRowWriter, inserts: readonly Stored[]): Promise<Stored[]> {
-  if (inserts.length === 0) return [];
+/**
+ * Inserts the new interviews and their photo rows; answers the ones someone stored first and
+ * the ones the database refused.
+ */
+async function insertNew(
+  writeNew: NewRowWriter,
+  inserts: readonly Stored[],
+): Promise<{ lost: Stored[]; refused: NewRowsOutcome['refused'] }> {
+  if (inserts.length === 0) return { lost: [], refused: new Map() };
   const rows = inserts.map((item) => item.row);
   const photos = inserts.flatMap((item) => item.photos);
-  const done = new Set(await writeNew(rows, photos));
-  return inserts.filter((item) => !done.has(item.id));
+  const outcome = await writeNew(rows, photos);
+  const done = new Set(outcome.stored);
+  const lost = inserts.filter((item) => !done.has(item.id) && !outcome.refused.has(item.id));
+  return { lost, refused: outcome.refused };
 }
 
 type LostAnswer =

@@ -1,3 +1,4 @@
+import { withLowerCaseIds } from '@shared/field-sync/lower-case-ids';
 import type { SyncBatchResult } from '@shared/field-sync/sync-batch';
 import type { Actor } from '../auth/actor';
 import type { Database } from '../db/database';
@@ -5,7 +6,7 @@ import { batchKeys } from './batch-keys';
 import { copyInterviewRows } from './copy-interview-rows';
 import { loadEnumeratorScope } from './enumerator-scope';
 import { loadExistingInterviews, loadPhotoOwners } from './existing-interviews';
-import { insertInterviewRows } from './insert-rows';
+import { insertItemByItem } from './insert-item-by-item';
 import { planSyncBatch } from './plan-sync-batch';
 import type { PublishedVersionCache } from './published-versions';
 import { loadRespondentMatches } from './respondent-matches';
@@ -22,9 +23,10 @@ export async function syncBatch(
   db: Database,
   versionCache: PublishedVersionCache,
   actor: Actor,
-  items: readonly unknown[],
+  sent: readonly unknown[],
 ): Promise<SyncBatchResult> {
   const receivedAt = new Date();
+  const items = sent.map(withLowerCaseIds);
   const keys = batchKeys(items);
   const [scope, versions, existing, photoOwners, respondentMatches] = await Promise.all([
     loadEnumeratorScope(db, actor),
@@ -42,23 +44,28 @@ export async function syncBatch(
     respondentMatches,
     receivedAt,
   });
-  // New interviews go in with one COPY (falling back to INSERT … ON CONFLICT when an id was
-  // taken meanwhile); corrections take several statements, so a batch with one runs in a
-  // transaction.
+  // New interviews go in with one COPY (falling back to INSERT … ON CONFLICT, item by item if
+  // need be, when an id was taken meanwhile or the database refused a row); corrections take
+  // several statements, so a batch with one runs in a transaction.
   const corrections = plan.some((item) => item.kind === 'resubmit');
   const results = corrections
     ? await db.transaction((tx) =>
         storeSyncBatch(tx, plan, actor.userId, (rows, photos) =>
-          insertInterviewRows(tx, rows, photos),
+          insertItemByItem(tx, rows, photos),
         ),
       )
     : await storeSyncBatch(db, plan, actor.userId, copyOrInsert(db));
   return { results, receivedAt: receivedAt.toISOString() };
 }
 
-/** The fast COPY path, or, when a concurrent request took one of the ids, the judging INSERT. */
+/**
+ * The fast COPY path, or, when a concurrent request took one of the ids or the database refused
+ * a row, the judging INSERT that sets aside only the rows refused.
+ */
 function copyOrInsert(db: Database): NewRowWriter {
-  return async (rows, photos) =>
-    (await copyInterviewRows(db.$client, rows, photos)) ??
-    (await insertInterviewRows(db, rows, photos));
+  return async (rows, photos) => {
+    const copied = await copyInterviewRows(db.$client, rows, photos);
+    if (copied) return { stored: copied, refused: new Map() };
+    return db.transaction((tx) => insertItemByItem(tx, rows, photos));
+  };
 }

@@ -13,6 +13,7 @@ const summaries: Record<SyncRejectionCode, string> = {
   'photo-manifest': 'The photo list does not match the answers',
   'id-conflict': 'Another interview already has this id',
   'repeated-in-batch': 'This interview id is sent twice in the batch',
+  unstorable: 'The database could not store this interview',
 };
 
 /** A rejection whose message sums up its issues: "Some answers … — answers.ladder: …". */

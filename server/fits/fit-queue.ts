@@ -1,4 +1,5 @@
 import PgBoss from 'pg-boss';
+import { logger } from '../http/logger';
 
 /** The queue fit jobs wait in; every worker process takes jobs from it. */
 export const fitQueueName = 'fieldcurve-fits';
@@ -24,7 +25,7 @@ export function createJobBoss(databaseUrl: string, role: 'sender' | 'worker'): P
     schedule: false,
     application_name: `fieldcurve-${role}`,
   });
-  boss.on('error', (error) => console.error(`[fieldcurve] job queue (${role}):`, error));
+  boss.on('error', (error) => logger.error({ err: error, role }, 'job queue error'));
   return boss;
 }
 

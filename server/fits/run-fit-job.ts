@@ -1,4 +1,5 @@
 import { and, eq, ne, sql } from 'drizzle-orm';
+import { logger } from '../http/logger';
 import { ZodError } from 'zod';
 import type { FitError } from '@shared/analysis/fit-resource';
 import { fitSpecSchema } from '@shared/analysis/fit-spec';
@@ -75,7 +76,7 @@ function describe(error: unknown): FitError {
       field: null,
     };
   }
-  console.error('[fieldcurve] fit job failed', error);
+  logger.error({ err: error }, 'fit job failed');
   return {
     code: 'internal',
     message: 'The fit failed on the server; it has been logged and will be retried.',

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { ApiError } from '@shared/http/api-error';
 import { HttpError } from './http-error';
+import { logger } from './logger';
 
 /** Answers unmatched API paths with JSON rather than the app shell. */
 export const apiNotFound: RequestHandler = (req, res) => {
@@ -31,7 +32,7 @@ export const errorHandler: ErrorRequestHandler = (error: unknown, req, res, next
     } satisfies ApiError);
     return;
   }
-  console.error(`[fieldcurve] ${req.method} ${req.originalUrl} failed`, error);
+  logger.error({ err: error, method: req.method, url: req.originalUrl }, 'request failed');
   res.status(500).json({
     error: { code: 'internal', message: 'Something went wrong on the server; it has been logged.' },
   } satisfies ApiError);

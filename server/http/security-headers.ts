@@ -14,12 +14,10 @@ export function securityHeaders(config: Config) {
         defaultSrc: ["'self'"],
         scriptSrc: ["'self'"],
         styleSrc: ["'self'", "'unsafe-inline'"],
-        // Review screens show interview photos through presigned links to the object store.
-        imgSrc: ["'self'", 'data:', 'blob:', objectStoreOrigin(config)],
+        // Review screens load interview photos through the API, never from the object store.
+        imgSrc: ["'self'", 'data:', 'blob:'],
         fontSrc: ["'self'"],
-        // The service worker fetches every request a page makes, photos included, and its
-        // fetches answer to connect-src: without the object store here, photos came back 504.
-        connectSrc: ["'self'", objectStoreOrigin(config)],
+        connectSrc: ["'self'"],
         workerSrc: ["'self'"],
         manifestSrc: ["'self'"],
         objectSrc: ["'none'"],
@@ -32,10 +30,4 @@ export function securityHeaders(config: Config) {
     strictTransportSecurity: secure,
     crossOriginEmbedderPolicy: false,
   });
-}
-
-/** The origin presigned photo links point at: the configured endpoint, or the bucket on AWS. */
-function objectStoreOrigin(config: Config): string {
-  if (config.S3_ENDPOINT) return new URL(config.S3_ENDPOINT).origin;
-  return `https://${config.S3_BUCKET}.s3.${config.S3_REGION}.amazonaws.com`;
 }

@@ -1,4 +1,5 @@
 import { and, eq, sql } from 'drizzle-orm';
+import { logger } from '../http/logger';
 import { portalSchedulePath } from '@shared/analysis/portal-paths';
 import type { ScheduleVersion } from '@shared/analysis/schedule-version';
 import type { AppDependencies } from '../app-dependencies';
@@ -32,7 +33,7 @@ export async function notifyClients(
   );
   sent.forEach((outcome, i) => {
     if (outcome.status === 'rejected')
-      console.error(`[fieldcurve] schedule mail to ${clients[i].email} failed`, outcome.reason);
+      logger.error({ err: outcome.reason, to: clients[i].email }, 'schedule mail failed');
   });
   return sent.filter((s) => s.status === 'fulfilled').length;
 }

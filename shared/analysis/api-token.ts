@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 
 /** An access token as its owner sees it in the portal (never the token itself after issue). */
 export const apiTokenSchema = z.object({
@@ -18,5 +19,5 @@ export type IssuedApiToken = z.infer<typeof issuedApiTokenSchema>;
 
 /** The body of POST /api/portal/tokens. */
 export const issueApiTokenRequestSchema = z.strictObject({
-  name: z.string().trim().min(1, 'Name the token (e.g. the tool that uses it)').max(100),
+  name: storableText().trim().min(1, 'Name the token (e.g. the tool that uses it)').max(100),
 });

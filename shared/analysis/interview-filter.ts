@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { storableDay } from '../storable/storable-day';
+import { storableText } from '../storable/storable-text';
 
 /**
  * Which accepted interviews of a study a fit uses: finished within a date range (UTC dates,
@@ -7,13 +9,13 @@ import { z } from 'zod';
  */
 export const interviewFilterSchema = z
   .strictObject({
-    from: z.iso.date({ error: 'Give the first day as YYYY-MM-DD' }).optional(),
-    to: z.iso.date({ error: 'Give the last day as YYYY-MM-DD' }).optional(),
+    from: storableDay('Give the first day as YYYY-MM-DD').optional(),
+    to: storableDay('Give the last day as YYYY-MM-DD').optional(),
     routeIds: z
       .array(z.uuid({ error: 'A route is named by its id' }))
       .max(500)
       .optional(),
-    regions: z.array(z.string().trim().min(1, 'A region name is empty')).max(500).optional(),
+    regions: z.array(storableText().trim().min(1, 'A region name is empty')).max(500).optional(),
     flagged: z.enum(['include', 'exclude'], { error: 'Choose include or exclude' }),
   })
   .refine((f) => !(f.from && f.to && f.from > f.to), {

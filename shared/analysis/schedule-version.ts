@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 import { analysisMethods } from './analysis-method';
 import { fitScheduleSchema, weightingSummarySchema } from './fit-result';
 import { fitSpecSchema } from './fit-spec';
@@ -49,7 +50,10 @@ export type ScheduleVersion = z.infer<typeof scheduleVersionSchema>;
 /** The body of POST /api/studies/:studyId/schedules. */
 export const publishScheduleRequestSchema = z.strictObject({
   fitId: z.uuid({ error: 'Choose a finished fit' }),
-  title: z.string().trim().min(1, 'Give the schedule a title').max(200, 'At most 200 characters'),
+  title: storableText()
+    .trim()
+    .min(1, 'Give the schedule a title')
+    .max(200, 'At most 200 characters'),
   replaces: z.uuid({ error: 'Name the version this corrects by its id' }).nullable().optional(),
 });
 export type PublishScheduleRequest = z.infer<typeof publishScheduleRequestSchema>;

@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { isStorableInstant } from '../storable/storable-instant';
+import { unstorableJsonProblems } from '../storable/unstorable-json';
 import type { FieldInterview } from './field-interview';
 import {
   maxPhotoBytes,
@@ -43,6 +45,8 @@ function hasExactly(record: Plain, keys: readonly string[]): boolean {
 
 const isText = (value: unknown, pattern: RegExp) =>
   typeof value === 'string' && pattern.test(value);
+
+const isInstant = (value: unknown) => isText(value, instant) && isStorableInstant(value as string);
 
 function gpsFits(gps: unknown): boolean {
   if (gps === undefined) return true;
@@ -97,13 +101,14 @@ export function fitsFieldInterview(raw: unknown): raw is FieldInterview {
     isText(raw['questionnaireVersionId'], uuid) &&
     isText(raw['routeId'], uuid) &&
     isText(raw['pointId'], uuid) &&
-    isText(startedAt, instant) &&
-    isText(finishedAt, instant) &&
+    isInstant(startedAt) &&
+    isInstant(finishedAt) &&
     Date.parse(finishedAt as string) >= Date.parse(startedAt as string) &&
     isPlain(raw['answers']) &&
+    unstorableJsonProblems(raw['answers']).length === 0 &&
     gpsFits(raw['gps']) &&
     (raw['respondentKey'] === undefined || isText(raw['respondentKey'], respondentKey)) &&
-    (raw['returnedAt'] === undefined || isText(raw['returnedAt'], instant)) &&
+    (raw['returnedAt'] === undefined || isInstant(raw['returnedAt'])) &&
     photosFit(raw['photos'])
   );
 }

@@ -1,8 +1,9 @@
 import { z } from 'zod';
+import { refuseUnstorableJson } from '../storable/storable-json';
+import { storableInstant } from '../storable/storable-instant';
 import { maxPhotosPerInterview, photoManifestEntrySchema } from './photo-manifest';
 
-const instant = (what: string) =>
-  z.iso.datetime({ offset: true, error: `${what} must be an ISO date-time with a time zone` });
+const instant = storableInstant;
 
 /** The device's GPS fix for the whole interview, with its stated accuracy in metres. */
 export const gpsFixSchema = z.strictObject({
@@ -39,9 +40,9 @@ export const fieldInterviewSchema = z
     pointId: z.uuid({ error: 'The point id must be a UUID' }),
     startedAt: instant('The start'),
     finishedAt: instant('The end'),
-    answers: z.record(z.string(), z.unknown(), {
-      error: 'Answers are an object keyed by block id',
-    }),
+    answers: z
+      .record(z.string(), z.unknown(), { error: 'Answers are an object keyed by block id' })
+      .superRefine(refuseUnstorableJson),
     gps: gpsFixSchema.optional(),
     respondentKey: z
       .string()

@@ -4,7 +4,7 @@ import { gpsFixSchema } from './field-interview';
 import { photoContentTypes } from './photo-manifest';
 import { reviewQueueItemSchema } from './review-queue';
 
-/** A photo of an interview; `url` is a short-lived link to the stored image (null until stored). */
+/** A photo of an interview; `url` is the API path that serves the stored image (null until stored). */
 export const interviewPhotoSchema = z.object({
   photoId: z.uuid(),
   contentType: z.enum(photoContentTypes),
@@ -12,7 +12,6 @@ export const interviewPhotoSchema = z.object({
   sha256: z.string(),
   stored: z.boolean(),
   url: z.string().nullable(),
-  urlExpiresAt: z.string().nullable(),
 });
 export type InterviewPhoto = z.infer<typeof interviewPhotoSchema>;
 

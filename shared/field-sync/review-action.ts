@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 
 /** What a supervisor can do with a received or flagged interview. */
 export const reviewActions = ['accept', 'return', 'reject'] as const;
@@ -18,7 +19,7 @@ export const statusAfterReview = {
 export const reviewActionSchema = z
   .strictObject({
     action: z.enum(reviewActions, { error: 'Choose accept, return or reject' }),
-    note: z.string().trim().max(2000, 'Keep the note under 2000 characters').optional(),
+    note: storableText().trim().max(2000, 'Keep the note under 2000 characters').optional(),
   })
   .superRefine((body, ctx) => {
     if (body.action !== 'accept' && !body.note) {

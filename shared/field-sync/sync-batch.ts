@@ -32,6 +32,7 @@ export const syncRejectionCodes = [
   'photo-manifest',
   'id-conflict',
   'repeated-in-batch',
+  'unstorable',
 ] as const;
 export type SyncRejectionCode = (typeof syncRejectionCodes)[number];
 

@@ -1,11 +1,12 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 import { roleSchema, roleSetSchema } from '../auth/role';
 
 /** Body of `POST /api/invitations`. */
 export const invitationRequestSchema = z
   .object({
     email: z.string().trim().toLowerCase().email('Enter a valid e-mail address'),
-    name: z.string().trim().min(1, 'Enter the person’s name').max(120),
+    name: storableText().trim().min(1, 'Enter the person’s name').max(120),
     roles: roleSetSchema,
   })
   .strict();

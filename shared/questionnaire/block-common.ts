@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 import { blockIdSchema } from './block-id';
 import { skipConditionSchema } from './skip-condition';
 
@@ -8,12 +9,11 @@ import { skipConditionSchema } from './skip-condition';
  */
 export const blockCommonShape = {
   id: blockIdSchema,
-  prompt: z
-    .string({ error: 'Write the question the enumerator reads out' })
+  prompt: storableText({ error: 'Write the question the enumerator reads out' })
     .trim()
     .min(1, 'Write the question the enumerator reads out')
     .max(1000, 'Keep the question under 1000 characters'),
-  note: z.string().max(1000, 'Keep the note under 1000 characters').optional(),
+  note: storableText().max(1000, 'Keep the note under 1000 characters').optional(),
   required: z.boolean({ error: 'Say whether an answer is required' }),
   showIf: skipConditionSchema.optional(),
 };

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 import type { BlockIssueSink } from './block-common';
 
 /** One answer a respondent can pick: a stable value for the data and a label to read out. */
@@ -6,7 +7,7 @@ export const choiceOptionSchema = z.strictObject({
   value: z.string().regex(/^[a-z0-9][a-z0-9_-]{0,39}$/, {
     error: 'Use 1–40 lower-case letters, digits, - or _ for the stored value',
   }),
-  label: z.string().trim().min(1, 'Give the option a label').max(200),
+  label: storableText().trim().min(1, 'Give the option a label').max(200),
 });
 export type ChoiceOption = z.infer<typeof choiceOptionSchema>;
 

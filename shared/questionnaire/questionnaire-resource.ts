@@ -1,10 +1,10 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 import type { QuestionnaireDefinition } from './questionnaire-definition';
 
 /** Body of `POST /api/studies/:studyId/questionnaires`; it starts as draft version 1. */
 export const questionnaireCreateSchema = z.strictObject({
-  title: z
-    .string({ error: 'Give the questionnaire a title' })
+  title: storableText({ error: 'Give the questionnaire a title' })
     .trim()
     .min(1, 'Give the questionnaire a title')
     .max(200),

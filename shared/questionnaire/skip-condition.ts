@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 import { blockIdSchema } from './block-id';
 
 /** The comparisons a skip condition can make with an earlier block's answer. */
@@ -14,7 +15,7 @@ export const skipTestLabels: Readonly<Record<SkipTest, string>> = {
   answered: 'was answered',
 };
 
-const compared = z.union([z.string().min(1, 'Choose a value to compare with'), z.number()]);
+const compared = z.union([storableText().min(1, 'Choose a value to compare with'), z.number()]);
 
 /**
  * `showIf` of a block: the block is asked only when an earlier block's answer passes the test.

@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { storableDay } from '../storable/storable-day';
+import { storableText } from '../storable/storable-text';
 
 /** One stop of a route as the supervisor plans it: which point, and how many interviews there. */
 export const routeStopInputSchema = z.object({
@@ -13,8 +15,8 @@ export type RouteStopInput = z.infer<typeof routeStopInputSchema>;
 
 // API callers type these days by hand: the message names the format, not just an example.
 const isoDate = (what: string) =>
-  z.iso.date({ error: `${what} must be a real day written YYYY-MM-DD, such as 2027-03-01.` });
-const isDay = (value: unknown) => z.iso.date().safeParse(value).success;
+  storableDay(`${what} must be a real day written YYYY-MM-DD, such as 2027-03-01.`);
+const isDay = (value: unknown) => isoDate('A day').safeParse(value).success;
 
 /**
  * Body of creating (`POST`) or replacing (`PUT`) a route. Stops are in visiting order, each point
@@ -23,8 +25,7 @@ const isDay = (value: unknown) => z.iso.date().safeParse(value).success;
  */
 export const fieldRouteInputSchema = z
   .object({
-    name: z
-      .string({ error: 'Give the route a name.' })
+    name: storableText({ error: 'Give the route a name.' })
       .trim()
       .min(1, { error: 'Give the route a name.' })
       .max(120, { error: 'The name may be at most 120 characters.' }),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 import { csvProblemSchema } from './csv-problem';
 import { normaliseKind, samplingPointKindSchema, samplingPointKinds } from './sampling-point-kind';
 
@@ -6,8 +7,7 @@ const codePattern = /^[A-Za-z0-9][A-Za-z0-9._\-/]*$/;
 const decimalPattern = /^[+-]?(\d+\.?\d*|\.\d+)$/;
 
 const requiredText = (what: string, max: number) =>
-  z
-    .string()
+  storableText()
     .trim()
     .min(1, { error: `Empty — every point needs ${what}.`, abort: true })
     .max(max, { error: `Longer than ${max} characters.` });
@@ -56,7 +56,7 @@ export const samplingPointRowSchema = z.object({
   latitude: coordinate('latitude', 90),
   longitude: coordinate('longitude', 180),
   stratum: requiredText('a stratum or region', 120),
-  notes: z.string().trim().max(1000, { error: 'Longer than 1000 characters.' }).default(''),
+  notes: storableText().trim().max(1000, { error: 'Longer than 1000 characters.' }).default(''),
 });
 
 /** A sampling point as a file or form describes it, before it is stored. */

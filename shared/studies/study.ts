@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 import { roleSchema } from '../auth/role';
 import { positiveMinorSchema } from '../money/minor-amount';
 import { studyStatusSchema } from './study-status-change';
@@ -14,7 +15,7 @@ function canonicalLocale(tag: string): string | null {
 }
 
 const text = (empty: string, max: number) =>
-  z.string({ error: empty }).trim().min(1, empty).max(max, `Keep it under ${max} characters`);
+  storableText({ error: empty }).trim().min(1, empty).max(max, `Keep it under ${max} characters`);
 
 /** Fields a researcher sets on a study; money is integer minor units of `currency`. */
 const studyFieldsShape = {

@@ -1,4 +1,5 @@
 import { eq } from 'drizzle-orm';
+import request from 'supertest';
 import { fieldNoticesSchema, type FieldNotices } from '@shared/field-sync/field-notice';
 import { interviewDetailSchema } from '@shared/field-sync/interview-detail';
 import { reviewQueueSchema, type ReviewQueue } from '@shared/field-sync/review-queue';
@@ -131,9 +132,25 @@ describe('one interview', () => {
     expect(detail.photos).toHaveLength(1);
     const link = detail.photos[0];
     expect(link).toMatchObject({ stored: true, sha256: sha256Hex(photo) });
-    const fetched = await fetch(link.url!);
+    // Served by the API behind the session, as the image type checked at upload, never sniffed.
+    expect(link.url).toBe(`${interviewPath(far.id)}/photos/${link.photoId}`);
+    const fetched = await setup.agents.supervisor
+      .get(link.url!)
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (chunk: Buffer) => chunks.push(chunk));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      });
     expect(fetched.status).toBe(200);
-    expect(sha256Hex(Buffer.from(await fetched.arrayBuffer()))).toBe(sha256Hex(photo));
+    expect(fetched.headers['content-type']).toBe('image/jpeg');
+    expect(fetched.headers['x-content-type-options']).toBe('nosniff');
+    expect(fetched.headers['cache-control']).toMatch(/no-store/);
+    expect(sha256Hex(fetched.body as Buffer)).toBe(sha256Hex(photo));
+    // Not to a signed-out caller, nor a researcher of another study, nor an unknown photo.
+    expect((await request(testApp.app).get(link.url!)).status).toBe(401);
+    const unknown = `${interviewPath(far.id)}/photos/${far.id}`;
+    expect((await setup.agents.supervisor.get(unknown)).status).toBe(404);
   });
 
   it('answers 404 for an interview of another study', async () => {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../../storable/storable-text';
 import { isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
@@ -10,8 +11,7 @@ export const consentBlockSchema = z.strictObject({
   ...blockCommonShape,
   kind: z.literal('consent'),
   required: z.literal(true, { error: 'Consent is always required' }),
-  statement: z
-    .string({ error: 'Write the consent statement' })
+  statement: storableText({ error: 'Write the consent statement' })
     .trim()
     .min(1, 'Write the consent statement')
     .max(4000, 'Keep the statement under 4000 characters'),

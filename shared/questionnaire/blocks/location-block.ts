@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableInstant } from '../../storable/storable-instant';
 import { isNumberBetween, isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
@@ -14,7 +15,7 @@ export const locationBlockSchema = z.strictObject({
 });
 export type LocationBlock = z.infer<typeof locationBlockSchema>;
 
-const fixTimeSchema = z.iso.datetime({ offset: true, error: 'Record when the fix was taken' });
+const fixTimeSchema = storableInstant('The time of the fix');
 
 /** A GPS fix: position, its accuracy in metres, and when it was taken. */
 export function locationAnswerSchema(_block: LocationBlock) {

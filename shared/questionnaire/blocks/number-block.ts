@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../../storable/storable-text';
 import { isNumberBetween, isRecordWith, isWholeBetween } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
@@ -10,7 +11,7 @@ export const numberBlockSchema = z
     min: z.number().finite().optional(),
     max: z.number().finite().optional(),
     wholeNumber: z.boolean({ error: 'Say whether only whole numbers are allowed' }),
-    unit: z.string().trim().max(40, 'Keep the unit short').optional(),
+    unit: storableText().trim().max(40, 'Keep the unit short').optional(),
   })
   .superRefine((block, ctx) => {
     if (block.min !== undefined && block.max !== undefined && block.max < block.min) {

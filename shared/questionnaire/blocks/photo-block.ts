@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../../storable/storable-text';
 import { isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
@@ -9,7 +10,7 @@ import { blockCommonShape } from '../block-common';
 export const photoBlockSchema = z.strictObject({
   ...blockCommonShape,
   kind: z.literal('photo'),
-  subject: z.string().trim().min(1, 'Say what to photograph').max(300),
+  subject: storableText().trim().min(1, 'Say what to photograph').max(300),
   maxPhotos: z.int('A whole number').min(1, 'Allow at least one photo').max(5, 'At most 5 photos'),
 });
 export type PhotoBlock = z.infer<typeof photoBlockSchema>;

@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { storableText } from '../../storable/storable-text';
+import { unstorableTextReason } from '../../storable/unstorable-text';
 import { isRecordWith } from '../answer-shape';
 import { blockCommonShape } from '../block-common';
 
@@ -13,8 +15,7 @@ export type TextBlock = z.infer<typeof textBlockSchema>;
 
 export function textAnswerSchema(block: TextBlock) {
   return z.strictObject({
-    value: z
-      .string()
+    value: storableText()
       .trim()
       .min(1, 'Type an answer')
       .max(block.maxLength, `At most ${block.maxLength} characters`),
@@ -29,7 +30,7 @@ export function textAnswerFits(block: TextBlock) {
   return (answer: unknown) => {
     if (!isRecordWith(answer, textKeys)) return false;
     const value = answer['value'];
-    if (typeof value !== 'string') return false;
+    if (typeof value !== 'string' || unstorableTextReason(value)) return false;
     const length = value.trim().length;
     return length >= 1 && length <= block.maxLength;
   };

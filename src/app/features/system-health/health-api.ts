@@ -8,7 +8,7 @@ function looksLikeReport(body: unknown): body is HealthReport {
   return typeof body === 'object' && body !== null && 'checks' in body && 'status' in body;
 }
 
-/** Reads `GET /api/health`. */
+/** Reads `GET /api/health/details` (admins). */
 @Injectable({ providedIn: 'root' })
 export class HealthApi {
   private readonly http = inject(HttpClient);
@@ -17,7 +17,7 @@ export class HealthApi {
   async fetchReport(): Promise<HealthReport> {
     try {
       return await firstValueFrom(
-        this.http.get<HealthReport>('/api/health', { context: withoutErrorNotice() }),
+        this.http.get<HealthReport>('/api/health/details', { context: withoutErrorNotice() }),
       );
     } catch (error) {
       if (error instanceof HttpErrorResponse && looksLikeReport(error.error)) return error.error;

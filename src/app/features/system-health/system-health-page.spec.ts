@@ -36,7 +36,7 @@ describe('SystemHealthPage', () => {
   }
 
   it('shows one card per dependency, marking the failed one', async () => {
-    server.expectOne('/api/health').flush(degraded, { status: 503, statusText: 'Unavailable' });
+    server.expectOne('/api/health/details').flush(degraded, { status: 503, statusText: 'Unavailable' });
     await fixture.whenStable();
     expect(cards()).toHaveLength(4);
     const failed = cards().filter((card) => card.classList.contains('dependency--failed'));
@@ -47,17 +47,17 @@ describe('SystemHealthPage', () => {
   });
 
   it('asks again when the refresh button is pressed', async () => {
-    server.expectOne('/api/health').flush({ ...degraded, status: 'ok' });
+    server.expectOne('/api/health/details').flush({ ...degraded, status: 'ok' });
     await fixture.whenStable();
     const button = (fixture.nativeElement as HTMLElement).querySelector('button')!;
     button.click();
-    server.expectOne('/api/health').flush(degraded, { status: 503, statusText: 'Unavailable' });
+    server.expectOne('/api/health/details').flush(degraded, { status: 503, statusText: 'Unavailable' });
     await fixture.whenStable();
     expect(fixture.nativeElement.textContent).toContain('Failed');
   });
 
   it('says so when the server cannot be reached', async () => {
-    server.expectOne('/api/health').error(new ProgressEvent('error'));
+    server.expectOne('/api/health/details').error(new ProgressEvent('error'));
     await fixture.whenStable();
     expect(cards()).toHaveLength(0);
     expect(fixture.nativeElement.querySelector('[role="alert"]').textContent).toContain(
