@@ -1,15 +1,14 @@
 import { Router } from 'express';
+import { and, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import type { AppDependencies } from '../app-dependencies';
-import { actorOf } from '../auth/actor';
+import { actorOf, type Actor } from '../auth/actor';
 import { studyRolesOf } from '../auth/study-roles';
+import type { Database } from '../db/database';
+import { studies } from '../db/schema';
 import { forbidden, notFound } from '../http/http-error';
 import { validate } from '../http/validate';
 import { listStudyDevices, signOutDevice } from './field-devices';
-import type { Database } from '../db/database';
-import type { Actor } from '../auth/actor';
-import { studies } from '../db/schema';
-import { and, eq } from 'drizzle-orm';
 
 const studyParams = z.object({ studyId: z.uuid('The study id must be a UUID') });
 const deviceParams = studyParams.extend({
