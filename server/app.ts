@@ -20,6 +20,8 @@ import { questionnairesRouter } from './questionnaires/questionnaires-router';
 import { studiesRouter } from './studies/studies-router';
 import { fieldSyncRouters, syncBodyParser } from './field-sync/field-sync-routers';
 import { analysisRouters } from './fits/analysis-routers';
+import { rateLimits } from './http/rate-limits';
+import { syncGate } from './field-sync/sync-gate';
 
 /** Builds the whole app without listening, so tests drive it through supertest. */
 export function createApp(deps: AppDependencies) {
@@ -31,6 +33,8 @@ export function createApp(deps: AppDependencies) {
   app.use(compression());
   app.use(securityHeaders(deps.config));
   app.use(sessionMiddleware(deps.config, deps.db));
+  const limits = rateLimits(deps.config, deps.db);
+  app.use(['/auth/sign-in', '/auth/callback', '/auth/invitation'], limits.signIn);
 
   app.use('/auth', express.urlencoded({ extended: false, limit: '4kb' }), authRouter(deps));
 
@@ -38,13 +42,15 @@ export function createApp(deps: AppDependencies) {
   api.use(requestLogger);
   api.use(noStore);
   // A sync batch may pass 1 MB; its own parser runs first (the next one skips a parsed body).
-  api.use('/field/sync', syncBodyParser);
+  api.use('/field/sync', syncGate(deps.config), syncBodyParser);
   api.use(express.json({ limit: '1mb' }));
   api.use(loadActor(deps.db));
+  api.use(limits.tokenGuesses);
   api.use(accessGuard(deps.db));
+  api.use(limits.writes);
   api.use(requireCsrfToken);
   api.use(healthRouter(deps));
-  api.use(sessionRouter());
+  api.use(sessionRouter(deps));
   api.use(membersRouter(deps));
   api.use(studiesRouter(deps));
   api.use(questionnairesRouter(deps));

@@ -1,5 +1,6 @@
 import { availableParallelism } from 'node:os';
 import { z } from 'zod';
+import { rateLimitConfig } from './http/rate-limit-config';
 
 const flag = z
   .enum(['true', 'false', '1', '0'])
@@ -32,6 +33,7 @@ const configSchema = z.object({
   S3_FORCE_PATH_STYLE: flag,
   SMTP_URL: z.string().startsWith('smtp'),
   MAIL_FROM: z.string().default('Fieldcurve <no-reply@fieldcurve.test>'),
+  ...rateLimitConfig,
 });
 
 export type Config = z.infer<typeof configSchema>;

@@ -27,7 +27,7 @@ export function accessGuard(db: Database): RequestHandler {
     if (rule.access === 'public') return next();
     if (rule.access === 'token') return admitToken(db, req, res).then(() => next());
     const actor = res.locals['actor'] as Actor | undefined;
-    if (!actor) throw notSignedIn();
+    if (!actor) throw (res.locals['sessionEnded'] as HttpError | undefined) ?? notSignedIn();
     if (rule.access === 'signed-in') return next();
     const allowed = rule.access;
     if (!actor.roles.some((role) => allowed.includes(role))) throw forbidden(openOnlyTo(allowed));

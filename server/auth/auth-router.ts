@@ -1,13 +1,16 @@
 import { Router, type Request } from 'express';
+import { and, ne } from 'drizzle-orm';
 import { z } from 'zod';
 import type { SessionInfo } from '@shared/auth/session';
 import type { AppDependencies } from '../app-dependencies';
 import { actorOf } from './actor';
+import { endSessions, sessionsOf } from './ended-session';
 import { csrfTokenFor, requireCsrfToken } from './csrf';
 import { IdentityProvider } from './identity-provider';
 import { resolveSignIn } from './sign-in-resolution';
 import { signInProblemCss, signInProblemPage } from './sign-in-problem-page';
 import { sessionCookieName } from '../http/session-middleware';
+import { sessions } from '../db/schema';
 import { findOpenInvitation } from '../members/invitations-repository';
 import { hashInvitationToken } from '../members/invitation-token';
 
@@ -101,8 +104,11 @@ export function authRouter({ db, identity }: AppDependencies): Router {
           ? `The invitation was sent to ${outcome.invitedEmail}, but you signed in as ${who.email}. Sign in with the invited address.`
           : outcome.kind === 'invitation-invalid'
             ? 'The invitation has already been accepted or withdrawn, or it has expired.'
-            : `${who.email} is not a member of any Fieldcurve organisation yet. Ask an administrator for an invitation.`;
-      res.status(403).send(signInProblemPage('No access yet', message));
+            : outcome.kind === 'deactivated'
+              ? `The access of ${who.email} to this organisation has been deactivated by an administrator. Ask them to reactivate it if you need it again.`
+              : `${who.email} is not a member of any Fieldcurve organisation yet. Ask an administrator for an invitation.`;
+      const title = outcome.kind === 'deactivated' ? 'Access deactivated' : 'No access yet';
+      res.status(403).send(signInProblemPage(title, message));
       return;
     }
     // A new session id after sign-in, so an id planted before sign-in is worthless.
@@ -122,9 +128,24 @@ export function authRouter({ db, identity }: AppDependencies): Router {
   return router;
 }
 
-/** `GET /api/session`: who the browser is signed in as, with the CSRF token to echo. */
-export function sessionRouter(): Router {
+/**
+ * `GET /api/session`: who the browser is signed in as, with the CSRF token to echo; and signing
+ * out on every device.
+ */
+export function sessionRouter({ db }: Pick<AppDependencies, 'db'>): Router {
   const router = Router();
+  // Ends every other session of the person in this organisation: a phone left signed in
+  // somewhere stops working at its next call and says why. The browser asking then signs out
+  // itself the usual way (POST /auth/sign-out), which the app does right after.
+  router.post('/session/sign-out-everywhere', async (req, res) => {
+    const actor = actorOf(res);
+    const ended = await endSessions(
+      db,
+      and(sessionsOf(actor.userId, actor.organisationId), ne(sessions.sid, req.sessionID))!,
+      'signed-out-everywhere',
+    );
+    res.json({ endedSessions: ended });
+  });
   router.get('/session', (req, res) => {
     const actor = actorOf(res);
     const body: SessionInfo = {

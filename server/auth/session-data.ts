@@ -13,6 +13,8 @@ declare module 'express-session' {
       codeVerifier: string;
       returnTo: string;
     };
+    /** Set when the session was ended from elsewhere (see ended-session.ts). */
+    endedReason: string;
     /** Carried through sign-in when the person arrived by an invitation link. */
     invitationToken: string;
   }

@@ -14,8 +14,12 @@ export interface VerifiedIdentity {
 export type SignInOutcome =
   | { kind: 'member'; userId: string; organisationId: string }
   | { kind: 'no-access' }
+  | { kind: 'deactivated' }
   | { kind: 'invitation-invalid' }
   | { kind: 'invitation-other-email'; invitedEmail: string };
+
+/** A person in several organisations signs in to one where they are still active. */
+const activeFirst = sql`${memberships.deactivatedAt} is not null`;
 
 /** Finds or creates the user for a verified identity, binding the provider's subject on first use. */
 async function upsertUser(tx: Executor, who: VerifiedIdentity) {
@@ -69,30 +73,49 @@ export async function resolveSignIn(
         .update(invitations)
         .set({ acceptedAt: new Date() })
         .where(eq(invitations.id, invitation.id));
+      const [joined] = await tx
+        .select({ deactivatedAt: memberships.deactivatedAt })
+        .from(memberships)
+        .where(
+          and(
+            eq(memberships.organisationId, invitation.organisationId),
+            eq(memberships.userId, userId),
+          ),
+        );
+      // An invitation does not undo an admin's deactivation; reactivating does.
+      if (joined?.deactivatedAt) return { kind: 'deactivated' };
       return { kind: 'member', userId, organisationId: invitation.organisationId };
     }
     const [known] = await tx
-      .select({ userId: users.id, organisationId: memberships.organisationId })
+      .select({
+        userId: users.id,
+        organisationId: memberships.organisationId,
+        deactivatedAt: memberships.deactivatedAt,
+      })
       .from(users)
       .innerJoin(memberships, eq(memberships.userId, users.id))
       .where(and(eq(users.identityIssuer, who.issuer), eq(users.identitySubject, who.subject)))
-      .orderBy(asc(memberships.createdAt))
+      .orderBy(activeFirst, asc(memberships.createdAt))
       .limit(1);
-    if (known) return { kind: 'member', ...known };
+    if (known?.deactivatedAt) return { kind: 'deactivated' };
+    if (known)
+      return { kind: 'member', userId: known.userId, organisationId: known.organisationId };
     // Seeded or pre-created users have an e-mail but no subject until their first sign-in.
     const [byEmail] = await tx
       .select({
         userId: users.id,
         organisationId: memberships.organisationId,
         subject: users.identitySubject,
+        deactivatedAt: memberships.deactivatedAt,
       })
       .from(users)
       .innerJoin(memberships, eq(memberships.userId, users.id))
       .where(eq(users.email, who.email))
-      .orderBy(asc(memberships.createdAt))
+      .orderBy(activeFirst, asc(memberships.createdAt))
       .limit(1);
     if (!byEmail || (byEmail.subject && byEmail.subject !== who.subject))
       return { kind: 'no-access' };
+    if (byEmail.deactivatedAt) return { kind: 'deactivated' };
     await upsertUser(tx, who);
     return { kind: 'member', userId: byEmail.userId, organisationId: byEmail.organisationId };
   });

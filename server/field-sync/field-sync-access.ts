@@ -41,4 +41,11 @@ export const fieldSyncAccess: readonly AccessRule[] = [
     scope: 'study',
   },
   { method: 'POST', path: `${interview}/review`, access: ['supervisor'], scope: 'study' },
+  // Admins see every study's devices, supervisors their studies' (checked in the router).
+  { method: 'GET', path: '/api/studies/:studyId/devices', access: ['admin', 'supervisor'] },
+  {
+    method: 'POST',
+    path: '/api/studies/:studyId/devices/:deviceId/sign-out',
+    access: ['admin', 'supervisor'],
+  },
 ];

@@ -7,6 +7,7 @@ import { fieldAssignments } from './assignments-query';
 import { fieldNotices } from './notices-query';
 import { PublishedVersionCache } from './published-versions';
 import { syncBatch } from './sync-batch';
+import { recordDeviceSync } from './field-devices';
 
 /**
  * Parses a sync batch before the API's 1 MB JSON parser sees it: 200 interviews with long
@@ -25,8 +26,18 @@ export function fieldSyncRouter(deps: AppDependencies): Router {
   });
 
   router.post('/field/sync', async (req, res) => {
-    const { interviews } = validate(syncBatchSchema, req.body);
-    res.json(await syncBatch(db, versions, actorOf(res), interviews));
+    const { interviews, outboxCount } = validate(syncBatchSchema, req.body);
+    const actor = actorOf(res);
+    const result = await syncBatch(db, versions, actor, interviews);
+    await recordDeviceSync(db, {
+      sessionId: req.sessionID,
+      userId: actor.userId,
+      organisationId: actor.organisationId,
+      userAgent: req.get('user-agent'),
+      outboxCount,
+      result,
+    });
+    res.json(result);
   });
 
   router.get('/field/notices', async (_req, res) => {

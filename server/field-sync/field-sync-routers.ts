@@ -3,6 +3,7 @@ import type { AppDependencies } from '../app-dependencies';
 import { fieldPhotosRouter } from './field-photos-router';
 import { fieldSyncRouter } from './field-sync-router';
 import { reviewRouter } from './review-router';
+import { devicesRouter } from './devices-router';
 
 export { syncBodyParser } from './field-sync-router';
 
@@ -12,5 +13,6 @@ export function fieldSyncRouters(deps: AppDependencies): Router {
   router.use(fieldSyncRouter(deps));
   router.use(fieldPhotosRouter(deps));
   router.use(reviewRouter(deps));
+  router.use(devicesRouter(deps));
   return router;
 }

@@ -12,6 +12,7 @@ import { refuseUnneededInvitation } from './invitation-conflicts';
 import { invitationMail } from './invitation-mail';
 import { createInvitation, listInvitations, withdrawInvitation } from './invitations-repository';
 import { listMembers, setMemberRoles } from './members-repository';
+import { deactivateMember, reactivateMember } from './member-lifecycle';
 
 const userIdParams = z.object({ userId: z.uuid('The member id must be a UUID') });
 const invitationIdParams = z.object({
@@ -30,6 +31,19 @@ export function membersRouter({ db, mailer, config }: AppDependencies): Router {
     const { userId } = validate(userIdParams, req.params, 'path');
     const { roles } = validate(memberRolesUpdateSchema, req.body);
     await setMemberRoles(db, actorOf(res).organisationId, userId, roles);
+    res.status(204).end();
+  });
+
+  router.post('/members/:userId/deactivate', async (req, res) => {
+    const { userId } = validate(userIdParams, req.params, 'path');
+    const actor = actorOf(res);
+    await deactivateMember(db, actor.organisationId, userId, actor.userId);
+    res.status(204).end();
+  });
+
+  router.post('/members/:userId/reactivate', async (req, res) => {
+    const { userId } = validate(userIdParams, req.params, 'path');
+    await reactivateMember(db, actorOf(res).organisationId, userId);
     res.status(204).end();
   });
 

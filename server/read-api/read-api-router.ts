@@ -14,8 +14,12 @@ const idSchema = z.uuid();
 /** /api/v1: published schedules of the token owner's studies as JSON or CSV, and the OpenAPI document. */
 export function readApiRouter(deps: AppDependencies): Router {
   const router = Router();
-  const studiesOf = (res: Parameters<typeof tokenOwnerFrom>[0]) =>
-    clientStudyIds(deps.db, tokenOwnerFrom(res));
+  // The owner's client studies, narrowed to the token's restriction when it has one.
+  const studiesOf = async (res: Parameters<typeof tokenOwnerFrom>[0]) => {
+    const owner = tokenOwnerFrom(res);
+    const ids = await clientStudyIds(deps.db, owner);
+    return owner.studyIds ? ids.filter((id) => owner.studyIds?.includes(id)) : ids;
+  };
 
   router.get('/v1/openapi.json', (_req, res) => {
     res.json(openApiDocument(deps.config.APP_URL));

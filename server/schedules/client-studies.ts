@@ -1,8 +1,11 @@
-import { and, eq, sql } from 'drizzle-orm';
+import { and, eq, isNull, sql } from 'drizzle-orm';
 import type { Executor } from '../db/database';
-import { studies, studyMembers } from '../db/schema';
+import { memberships, studies, studyMembers } from '../db/schema';
 
-/** The studies of their organisation in which a person is a client member. */
+/**
+ * The studies of their organisation in which a person is a client member, while they are still
+ * an active client of the organisation (a stale study row grants nothing).
+ */
 export async function clientStudyIds(
   db: Executor,
   who: { userId: string; organisationId: string },
@@ -11,6 +14,15 @@ export async function clientStudyIds(
     .select({ id: studies.id })
     .from(studyMembers)
     .innerJoin(studies, eq(studies.id, studyMembers.studyId))
+    .innerJoin(
+      memberships,
+      and(
+        eq(memberships.userId, studyMembers.userId),
+        eq(memberships.organisationId, studies.organisationId),
+        isNull(memberships.deactivatedAt),
+        sql`'client' = any(${memberships.roles})`,
+      ),
+    )
     .where(
       and(
         eq(studyMembers.userId, who.userId),

@@ -9,7 +9,10 @@ import { questionnaireVersions, questionnaires, studies, studyMembers } from '..
 import { HttpError, notFound } from '../http/http-error';
 import { toStudy } from './study-row';
 
-/** The studies the actor is a member of, newest first, each with the actor's roles in it. */
+/**
+ * The studies the actor is a member of, newest first, each with the actor's roles in it — only
+ * those they still hold in the organisation (a study left with none is not listed).
+ */
 export async function listStudiesOf(db: Database, actor: Actor): Promise<Study[]> {
   const rows = await db
     .select({ study: studies, roles: studyMembers.roles })
@@ -19,7 +22,10 @@ export async function listStudiesOf(db: Database, actor: Actor): Promise<Study[]
       and(eq(studyMembers.userId, actor.userId), eq(studies.organisationId, actor.organisationId)),
     )
     .orderBy(desc(studies.createdAt));
-  return rows.map((row) => toStudy(row.study, row.roles));
+  return rows.flatMap((row) => {
+    const current = row.roles.filter((role) => actor.roles.includes(role));
+    return current.length > 0 ? [toStudy(row.study, current)] : [];
+  });
 }
 
 /** Creates a study in the actor's organisation; its creator joins it as a researcher. */

@@ -15,11 +15,19 @@ export const syncBatchSchema = z.strictObject({
     .array(z.unknown(), { error: 'Send the interviews as a list' })
     .min(1, 'Send at least one interview')
     .max(maxSyncBatchSize, `Send at most ${maxSyncBatchSize} interviews per batch`),
+  /** How many interviews the device still holds unsent besides this batch (for supervisors). */
+  outboxCount: z
+    .number({ error: 'The outbox count must be a number' })
+    .int('The outbox count must be a whole number')
+    .min(0, 'The outbox count cannot be negative')
+    .max(1_000_000, 'The outbox count is implausibly large')
+    .optional(),
 });
 
 /** What the device sends: the typed form of `syncBatchSchema`. */
 export interface SyncBatch {
   interviews: FieldInterview[];
+  outboxCount?: number;
 }
 
 /** Why the server refused one interview of a batch. */

@@ -13,6 +13,8 @@ export const apiErrorSchema = z.object({
     code: z.string(),
     message: z.string(),
     issues: z.array(fieldIssueSchema).optional(),
+    /** On a 429 or 503: which limit was reached (the `Retry-After` header says when to retry). */
+    limit: z.string().optional(),
   }),
 });
 export type ApiError = z.infer<typeof apiErrorSchema>;

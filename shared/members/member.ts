@@ -8,6 +8,8 @@ export const memberSchema = z.object({
   name: z.string(),
   roles: z.array(roleSchema),
   joinedAt: z.string(),
+  /** When an admin deactivated the person; null while they are active. */
+  deactivatedAt: z.string().nullable(),
 });
 export type Member = z.infer<typeof memberSchema>;
 

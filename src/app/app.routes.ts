@@ -55,6 +55,12 @@ export const routes: Routes = [
         loadChildren: () => import('./features/portal/portal.routes').then((m) => m.portalRoutes),
       },
       {
+        path: 'devices',
+        canMatch: [roleGuard('admin', 'supervisor')],
+        loadChildren: () =>
+          import('./features/devices/devices.routes').then((m) => m.devicesRoutes),
+      },
+      {
         path: 'system-health',
         canMatch: [roleGuard('admin')],
         loadChildren: () =>

@@ -26,23 +26,26 @@ export interface BenchDevice {
 }
 
 export interface BenchStudy {
+  organisationId: string;
   studyId: string;
   versionId: string;
   devices: BenchDevice[];
 }
 
-async function insertEnumerator(
+/** A member of the study in one role, with a signed session (as the sign-in callback makes). */
+export async function insertBenchMember(
   db: Database,
   organisationId: string,
   studyId: string,
   secret: string,
+  role: 'enumerator' | 'supervisor' = 'enumerator',
 ) {
   const [user] = await db
     .insert(users)
-    .values({ email: `bench.${randomUUID()}@example.test`, name: 'Bench enumerator' })
+    .values({ email: `bench.${randomUUID()}@example.test`, name: `Bench ${role}` })
     .returning({ id: users.id });
-  await db.insert(memberships).values({ organisationId, userId: user.id, roles: ['enumerator'] });
-  await db.insert(studyMembers).values({ studyId, userId: user.id, roles: ['enumerator'] });
+  await db.insert(memberships).values({ organisationId, userId: user.id, roles: [role] });
+  await db.insert(studyMembers).values({ studyId, userId: user.id, roles: [role] });
   const sid = randomUUID();
   const csrfToken = randomBytes(32).toString('base64url');
   const expire = new Date(Date.now() + 3 * 60 * 60 * 1000);
@@ -148,9 +151,9 @@ export async function createBenchStudy(
     .returning({ id: questionnaireVersions.id });
   const devices: BenchDevice[] = [];
   for (let index = 0; index < deviceCount; index += 1) {
-    const person = await insertEnumerator(db, organisation.id, study.id, secret);
+    const person = await insertBenchMember(db, organisation.id, study.id, secret);
     const route = await insertRoute(db, study.id, person.userId, index);
     devices.push({ cookie: person.cookie, csrfToken: person.csrfToken, ...route });
   }
-  return { studyId: study.id, versionId: version.id, devices };
+  return { organisationId: organisation.id, studyId: study.id, versionId: version.id, devices };
 }

@@ -29,12 +29,22 @@ function localSecret(dir: string): string {
   return readFileSync(file, 'utf8');
 }
 
+/** Rate limits no test run reaches; the rate-limit tests build an app with low ones. */
+const generousRateLimits: Record<string, string> = {
+  RATE_SIGN_IN_PER_ADDRESS: '1000000',
+  RATE_TOKEN_FAILURES_PER_ADDRESS: '1000000',
+  RATE_SYNC_PER_USER: '1000000',
+  RATE_WRITES_PER_USER: '1000000',
+};
+
 /** Starts PostgreSQL and the stand-ins; each step says what failed if it cannot start. */
 export async function startLocalStack(
   dir: string,
   ports: StackPorts,
   database: string,
   freshDatabase = false,
+  /** For test runs: limits far above anything the tests do (the rate-limit tests set their own). */
+  generousLimits = false,
 ): Promise<LocalStack> {
   const stoppers: (() => Promise<void> | void)[] = [];
   const stop = async () => {
@@ -76,6 +86,7 @@ export async function startLocalStack(
       clientSecret,
       redirectUris: [`${appUrl}/auth/callback`],
       accounts,
+      wrongPasswordLimits: generousLimits ? { perAccount: 10_000, perAddress: 10_000 } : undefined,
     }),
   );
   stoppers.push(() => idp.stop());
@@ -100,6 +111,7 @@ export async function startLocalStack(
       // The lockfile pins the S3 client; its notice that later releases will need a newer Node
       // than the supported one is printed by every process and asks nothing of this stack.
       AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
+      ...(generousLimits ? generousRateLimits : {}),
     },
     mailInboxUrl: `http://127.0.0.1:${ports.mailInbox}`,
     stop,

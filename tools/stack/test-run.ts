@@ -30,7 +30,7 @@ async function main(): Promise<number> {
   // a cold cluster starts in about two seconds.
   const runDir = join(stateDir('test'), `run-${process.pid}`);
   mkdirSync(runDir, { recursive: true });
-  const stack = await startLocalStack(runDir, ports, 'fieldcurve_test', true);
+  const stack = await startLocalStack(runDir, ports, 'fieldcurve_test', true, true);
   const results: StepResult[] = [];
   let stopServer = async () => {};
   try {

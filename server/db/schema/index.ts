@@ -14,3 +14,5 @@ export * from './interview-photos';
 export * from './fits';
 export * from './schedule-versions';
 export * from './api-tokens';
+export * from './field-devices';
+export * from './rate-limits';

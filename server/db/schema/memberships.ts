@@ -15,6 +15,8 @@ export const memberships = pgTable(
       .references(() => users.id, { onDelete: 'cascade' }),
     roles: roleEnum().array().notNull(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    /** Set while an admin has deactivated the person: the row (and their history) stays. */
+    deactivatedAt: timestamp({ withTimezone: true }),
   },
   (table) => [primaryKey({ columns: [table.organisationId, table.userId] })],
 );

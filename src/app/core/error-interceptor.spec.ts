@@ -66,4 +66,12 @@ describe('errorInterceptor', () => {
     expect(show.mock.calls[0][0]).toContain('Your session has ended');
     expect(navigate).toHaveBeenCalledWith(['/welcome'], { queryParams: { returnTo: '/' } });
   });
+
+  it('says why when the session was ended from elsewhere', async () => {
+    await signInAs(['enumerator']);
+    vi.spyOn(TestBed.inject(Router), 'navigate').mockResolvedValue(true);
+    const message = 'This device was signed out by an administrator or supervisor.';
+    failWith(401, { error: { code: 'session-ended', message } }, true);
+    expect(show).toHaveBeenCalledWith(message);
+  });
 });

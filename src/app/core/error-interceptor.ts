@@ -20,7 +20,13 @@ export const errorInterceptor: HttpInterceptorFn = (request, next) => {
       if (error instanceof HttpErrorResponse && error.status === 401 && session.signedIn()) {
         session.markSignedOut();
         const returnTo = router.url;
-        notices.show('Your session has ended. Sign in again to carry on.');
+        // A session ended from elsewhere (device signed out, member deactivated) says why.
+        const problem = readApiProblem(error);
+        notices.show(
+          problem.code === 'session-ended'
+            ? problem.message
+            : 'Your session has ended. Sign in again to carry on.',
+        );
         void router.navigate(['/welcome'], { queryParams: { returnTo } });
       } else if (request.context.get(SHOW_ERROR_NOTICE)) {
         notices.show(readApiProblem(error).message);

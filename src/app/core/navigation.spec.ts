@@ -6,12 +6,22 @@ function labelsFor(roles: Role[]): string[] {
 }
 
 describe('navGroupsFor', () => {
-  it('gives an administrator Home, Members and System health', () => {
-    expect(labelsFor(['admin'])).toEqual(['Home', 'Members', 'System health']);
+  it('gives an administrator Home, field devices, Members, access tokens and System health', () => {
+    expect(labelsFor(['admin'])).toEqual([
+      'Home',
+      'Devices',
+      'Members',
+      'Access tokens',
+      'System health',
+    ]);
   });
 
   it('puts the administration pages under their own heading', () => {
-    expect(navGroupsFor(['admin']).map((group) => group.title)).toEqual([null, 'Administration']);
+    expect(navGroupsFor(['admin']).map((group) => group.title)).toEqual([
+      null,
+      'Supervision',
+      'Administration',
+    ]);
   });
 
   it('gives a researcher their studies, the field plans to read and the analysis pages', () => {
@@ -27,8 +37,14 @@ describe('navGroupsFor', () => {
     expect(navGroupsFor(['enumerator']).map((group) => group.title)).toEqual([null, 'Field work']);
   });
 
-  it('gives a supervisor field planning and the review queue', () => {
-    expect(labelsFor(['supervisor'])).toEqual(['Home', 'Studies', 'Field planning', 'Review']);
+  it('gives a supervisor field planning, the review queue and the field devices', () => {
+    expect(labelsFor(['supervisor'])).toEqual([
+      'Home',
+      'Studies',
+      'Field planning',
+      'Review',
+      'Devices',
+    ]);
   });
 
   it('shows a person with several roles the union, each entry once', () => {
@@ -37,7 +53,9 @@ describe('navGroupsFor', () => {
       'Studies',
       'Field planning',
       'Analysis',
+      'Devices',
       'Members',
+      'Access tokens',
       'System health',
     ]);
   });

@@ -49,6 +49,7 @@ const sections: readonly NavGroup[] = [
         audience: ['supervisor', 'researcher'],
       },
       { label: 'Review', icon: 'fact_check', path: '/review', audience: ['supervisor'] },
+      { label: 'Devices', icon: 'devices', path: '/devices', audience: ['supervisor', 'admin'] },
     ],
   },
   {
@@ -61,6 +62,7 @@ const sections: readonly NavGroup[] = [
     title: 'Administration',
     items: [
       { label: 'Members', icon: 'group', path: '/members', audience: ['admin'] },
+      { label: 'Access tokens', icon: 'key', path: '/members/tokens', audience: ['admin'] },
       {
         label: 'System health',
         icon: 'monitor_heart',

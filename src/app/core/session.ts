@@ -63,6 +63,15 @@ export class Session {
     void this.cache.forget().catch(() => undefined);
   }
 
+  /**
+   * Ends the person's sessions on every other device (each is told why at its next call), then
+   * signs this browser out as usual.
+   */
+  async signOutEverywhere(): Promise<void> {
+    await firstValueFrom(this.http.post('/api/session/sign-out-everywhere', {}));
+    await this.signOut();
+  }
+
   async signOut(): Promise<void> {
     await firstValueFrom(this.http.post('/auth/sign-out', null));
     this.markSignedOut();

@@ -6,6 +6,11 @@ import { join } from 'node:path';
 import Provider, { type Configuration } from 'oidc-provider';
 import { AccountStore } from './account-store';
 import { interactionRoutes } from './interaction-routes';
+import {
+  defaultWrongPasswordLimits,
+  WrongPasswordGuard,
+  type WrongPasswordLimits,
+} from './wrong-password-limits';
 
 export interface IdentityProviderOptions {
   dir: string;
@@ -14,6 +19,8 @@ export interface IdentityProviderOptions {
   clientSecret: string;
   redirectUris: string[];
   accounts: readonly { email: string; name: string; password: string }[];
+  /** Wrong passwords allowed per account and per address in 15 minutes. */
+  wrongPasswordLimits?: WrongPasswordLimits;
 }
 
 export interface RunningIdentityProvider {
@@ -97,7 +104,8 @@ export async function startIdentityProvider(
   };
   const provider = new Provider(issuer, configuration);
   const app = express();
-  app.use('/interaction', interactionRoutes(provider, accounts));
+  const guard = new WrongPasswordGuard(options.wrongPasswordLimits ?? defaultWrongPasswordLimits);
+  app.use('/interaction', interactionRoutes(provider, accounts, guard));
   app.use(provider.callback());
   const server: Server = await new Promise((resolveListen, reject) => {
     const listening = app.listen(options.port, '127.0.0.1', () => resolveListen(listening));

@@ -2,6 +2,7 @@ import express, { Router, type Request, type Response } from 'express';
 import type Provider from 'oidc-provider';
 import type { AccountStore } from './account-store';
 import { createAccountPage, problemPage, signInPage } from './sign-in-pages';
+import type { WrongPasswordGuard } from './wrong-password-limits';
 
 const form = express.urlencoded({ extended: false, limit: '4kb' });
 
@@ -31,7 +32,11 @@ function field(req: Request, name: string): string {
 }
 
 /** Sign-in and account creation screens of the local provider. */
-export function interactionRoutes(provider: Provider, accounts: AccountStore): Router {
+export function interactionRoutes(
+  provider: Provider,
+  accounts: AccountStore,
+  guard: WrongPasswordGuard,
+): Router {
   const router = Router();
   const noStore = (_req: Request, res: Response, next: () => void) => {
     res.set('cache-control', 'no-store');
@@ -54,8 +59,26 @@ export function interactionRoutes(provider: Provider, accounts: AccountStore): R
 
   router.post('/:uid/sign-in', form, async (req, res) => {
     const email = field(req, 'email');
+    const address = req.ip ?? 'unknown';
+    const waitMs = await guard.waitBeforeAttempt(email, address);
+    if (waitMs > 0) {
+      const minutes = Math.ceil(waitMs / 60_000);
+      res
+        .status(429)
+        .set('Retry-After', String(Math.ceil(waitMs / 1000)))
+        .type('html')
+        .send(
+          signInPage(
+            req.params.uid,
+            email,
+            `Too many wrong passwords for this account or from this address. Try again in ${minutes} min.`,
+          ),
+        );
+      return;
+    }
     const account = accounts.verify(email, field(req, 'password'));
     if (!account) {
+      await guard.wrongPassword(email, address);
       res
         .status(401)
         .type('html')
@@ -64,6 +87,7 @@ export function interactionRoutes(provider: Provider, accounts: AccountStore): R
         );
       return;
     }
+    await guard.rightPassword(email);
     await finishWithGrant(provider, req, res, account.id);
   });
 

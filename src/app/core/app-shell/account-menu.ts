@@ -25,6 +25,10 @@ export class AccountMenu {
       .join(', '),
   );
 
+  protected signOutEverywhere(): void {
+    this.session.signOutEverywhere().catch(() => undefined);
+  }
+
   protected signOut(): void {
     // A failure is reported by the error interceptor; the person stays signed in.
     this.session.signOut().catch(() => undefined);

@@ -14,7 +14,10 @@ const wideColumns = ['name', 'email', 'roles', 'joined', 'actions'];
 // On a phone everything about a person stacks in one cell, so nothing is squeezed letter by letter.
 const narrowColumns = ['person', 'actions'];
 
-/** The organisation's members, with a button to change each person's roles. */
+/**
+ * The organisation's members, with buttons to change each person's roles and to deactivate or
+ * reactivate them.
+ */
 @Component({
   selector: 'app-member-table',
   imports: [DatePipe, NgTemplateOutlet, MatChipsModule, MatIcon, MatIconButton, MatTableModule],
@@ -25,6 +28,8 @@ const narrowColumns = ['person', 'actions'];
 export class MemberTable {
   readonly members = input.required<readonly Member[]>();
   readonly editRoles = output<Member>();
+  readonly deactivate = output<Member>();
+  readonly reactivate = output<Member>();
 
   private readonly wide = toSignal(
     inject(BreakpointObserver)

@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
-import { MatButton } from '@angular/material/button';
+import { MatAnchor, MatButton } from '@angular/material/button';
+import { RouterLink } from '@angular/router';
 import { MatCardModule } from '@angular/material/card';
 import { MatDialog } from '@angular/material/dialog';
 import { MatProgressBar } from '@angular/material/progress-bar';
@@ -14,11 +15,21 @@ import { MemberTable } from './member-table';
 import { MembersApi } from './members-api';
 import { RoleDialog, RoleDialogData } from './role-dialog';
 import { WithdrawDialog, type WithdrawDialogData } from './withdraw-dialog';
+import { MemberStatusDialog, type MemberStatusDialogData } from './member-status-dialog';
 
 /** The administrator's view of who belongs to the organisation and who has been invited. */
 @Component({
   selector: 'app-members-page',
-  imports: [MatButton, MatCardModule, MatProgressBar, InvitationList, InviteForm, MemberTable],
+  imports: [
+    MatAnchor,
+    MatButton,
+    RouterLink,
+    MatCardModule,
+    MatProgressBar,
+    InvitationList,
+    InviteForm,
+    MemberTable,
+  ],
   templateUrl: './members-page.html',
   styleUrl: './members-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -73,6 +84,23 @@ export class MembersPage {
       .subscribe((saved) => {
         if (!saved) return;
         this.snackBar.open(`Roles of ${member.name} saved.`, 'Close', { duration: 5000 });
+        this.loadMembers();
+      });
+  }
+
+  protected changeStatus(member: Member, action: MemberStatusDialogData['action']): void {
+    const data: MemberStatusDialogData = { member, action };
+    this.dialog
+      .open<MemberStatusDialog, MemberStatusDialogData, boolean>(MemberStatusDialog, {
+        data,
+        width: '28rem',
+        maxWidth: '95vw',
+      })
+      .afterClosed()
+      .subscribe((done) => {
+        if (!done) return;
+        const what = action === 'deactivate' ? 'deactivated' : 'reactivated';
+        this.snackBar.open(`${member.name} ${what}.`, 'Close', { duration: 5000 });
         this.loadMembers();
       });
   }

@@ -7,6 +7,7 @@ import { readApiProblem } from '../../core/api-problem';
 import { sortIssues } from './field-issues';
 import { MembersApi } from './members-api';
 import { RolePicker } from './role-picker';
+import { roleChangeConsequences } from './role-change-consequences';
 
 export interface RoleDialogData {
   readonly member: Member;
@@ -22,6 +23,15 @@ export interface RoleDialogData {
       margin: 0 0 16px;
       color: var(--mat-sys-on-surface-variant);
       overflow-wrap: anywhere;
+    }
+    .role-dialog__consequences {
+      margin: 12px 0 0;
+      padding: 8px 12px;
+      border-radius: 8px;
+      background: var(--mat-sys-surface-container-high);
+    }
+    .role-dialog__consequences p {
+      margin: 4px 0;
     }
     .role-dialog__error {
       margin: 8px 0 0;
@@ -42,6 +52,10 @@ export class RoleDialog {
   protected readonly saving = signal(false);
   protected readonly serverRolesError = signal<string | null>(null);
   protected readonly formError = signal<string | null>(null);
+  /** What saving will do beyond the list (a role taken away goes from every study too). */
+  protected readonly consequences = computed(() =>
+    roleChangeConsequences(this.member.roles, this.chosen()),
+  );
   protected readonly rolesError = computed(() =>
     this.chosen().length === 0 ? 'Choose at least one role.' : this.serverRolesError(),
   );

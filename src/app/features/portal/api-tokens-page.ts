@@ -9,7 +9,16 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
-import type { ApiToken, IssuedApiToken } from '@shared/analysis/api-token';
+import {
+  defaultTokenLifetimeDays,
+  type ApiToken,
+  type IssuedApiToken,
+} from '@shared/analysis/api-token';
+import type { Study } from '@shared/studies/study';
+import { MatCheckbox } from '@angular/material/checkbox';
+import { MatOption } from '@angular/material/core';
+import { MatSelect } from '@angular/material/select';
+import { tokenStatus } from '@shared/analysis/token-status';
 import { readApiDocumentPath } from '@shared/analysis/portal-paths';
 import { firstValueFrom } from 'rxjs';
 import { readApiProblem } from '../../core/api-problem';
@@ -29,6 +38,9 @@ import { PortalApi } from './portal-api';
     MatFormFieldModule,
     MatIcon,
     MatInput,
+    MatCheckbox,
+    MatOption,
+    MatSelect,
     RouterLink,
   ],
   templateUrl: './api-tokens-page.html',
@@ -47,16 +59,44 @@ export class ApiTokensPage {
   protected readonly issued = signal<IssuedApiToken | null>(null);
   protected readonly problem = signal<string | null>(null);
   protected readonly busy = signal(false);
+  protected readonly lifetimes = [30, 90, 180, 365] as const;
+  protected readonly expiresInDays = signal<number>(defaultTokenLifetimeDays);
+  /** The client's studies, and the ones the next token is restricted to (none: all of them). */
+  protected readonly studies = signal<readonly Study[]>([]);
+  protected readonly restrictTo = signal<readonly string[]>([]);
+  protected readonly statusOf = tokenStatus;
 
   constructor() {
     void this.loadTokens();
+    this.api.listStudies().subscribe({
+      next: (studies) => this.studies.set(studies),
+      error: () => this.studies.set([]),
+    });
+  }
+
+  protected toggleStudy(studyId: string, chosen: boolean): void {
+    this.restrictTo.update((ids) =>
+      chosen ? [...ids, studyId] : ids.filter((id) => id !== studyId),
+    );
+  }
+
+  protected studyNames(ids: readonly string[]): string {
+    return ids.map((id) => this.studies().find((s) => s.id === id)?.name ?? 'a study').join(', ');
   }
 
   protected async issueToken(): Promise<void> {
     this.busy.set(true);
     this.problem.set(null);
     try {
-      const token = await firstValueFrom(this.api.issueToken(this.name().trim()));
+      const restriction = this.restrictTo();
+      const token = await firstValueFrom(
+        this.api.issueToken({
+          name: this.name().trim(),
+          expiresInDays: this.expiresInDays(),
+          ...(restriction.length > 0 ? { studyIds: [...restriction] } : {}),
+        }),
+      );
+      this.restrictTo.set([]);
       this.issued.set(token);
       this.name.set('');
       await this.loadTokens();

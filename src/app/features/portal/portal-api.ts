@@ -1,7 +1,8 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { Observable } from 'rxjs';
-import type { ApiToken, IssuedApiToken } from '@shared/analysis/api-token';
+import type { ApiToken, IssuedApiToken, IssueApiTokenRequest } from '@shared/analysis/api-token';
+import type { Study } from '@shared/studies/study';
 import type { ScheduleVersion, ScheduleVersionSummary } from '@shared/analysis/schedule-version';
 import { withoutErrorNotice } from '../../core/error-notice-context';
 
@@ -44,8 +45,13 @@ export class PortalApi {
     return this.http.get<ApiToken[]>('/api/portal/tokens', this.quiet);
   }
 
-  issueToken(name: string): Observable<IssuedApiToken> {
-    return this.http.post<IssuedApiToken>('/api/portal/tokens', { name }, this.quiet);
+  issueToken(request: IssueApiTokenRequest): Observable<IssuedApiToken> {
+    return this.http.post<IssuedApiToken>('/api/portal/tokens', request, this.quiet);
+  }
+
+  /** The studies shared with the client, to restrict a token to some of them. */
+  listStudies(): Observable<Study[]> {
+    return this.http.get<Study[]>('/api/studies', this.quiet);
   }
 
   revokeToken(tokenId: string): Observable<unknown> {

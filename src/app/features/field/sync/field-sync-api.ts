@@ -25,9 +25,10 @@ export class FieldSyncApi {
     return fieldAssignmentsSchema.parse(body);
   }
 
-  sendBatch(interviews: readonly FieldInterview[]): Promise<SyncBatchResult> {
+  /** Sends a batch, saying how many interviews still wait behind it (supervisors see that). */
+  sendBatch(interviews: readonly FieldInterview[], outboxCount?: number): Promise<SyncBatchResult> {
     return firstValueFrom(
-      this.http.post<SyncBatchResult>('/api/field/sync', { interviews }, this.quiet),
+      this.http.post<SyncBatchResult>('/api/field/sync', { interviews, outboxCount }, this.quiet),
     );
   }
 

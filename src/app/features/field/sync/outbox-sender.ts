@@ -33,7 +33,10 @@ export class OutboxSender {
       const batch = await db.outbox.where('state').equals('waiting').sortBy('queuedAt');
       if (batch.length === 0) return summary;
       const sending = batch.slice(0, batchSize);
-      const { results } = await this.api.sendBatch(sending.map((entry) => entry.interview));
+      const { results } = await this.api.sendBatch(
+        sending.map((entry) => entry.interview),
+        batch.length - sending.length,
+      );
       await recordResults(db, sending, results);
       summary.batches++;
       for (const result of results) summary[result.outcome]++;
