@@ -61,7 +61,7 @@ export async function twoStageInDatabase(
   ].map((column) => sql`f.${sql.identifier(column)}`);
   // The stage's rows: the response replaced, the price replaced by its prediction, the rest as is.
   const stage = (response: SQL) => ({
-    query: sql`SELECT ${response} AS ${y}, f.__fitted AS ${p}, ${sql.join(carried, sql`, `)}
+    query: sql`SELECT ${sql.join([sql`${response} AS ${y}`, sql`f.__fitted AS ${p}`, ...carried], sql`, `)}
                FROM (${fittedSource}) AS f`,
   });
   const secondStage = await fitInDatabase(db, {
