@@ -5,9 +5,10 @@ import type { BenchContext, BenchPart } from './bench-part';
 import { fitBench } from './fit-bench';
 import { memoryFitBench } from './memory-fit-bench';
 import { syncBench } from './sync-bench';
+import { datasetBench } from './dataset-bench';
 
 /** The parts `npm run bench` runs, in order; `npm run bench -- NAME…` runs only those. */
-const parts: readonly BenchPart[] = [fitBench, memoryFitBench, syncBench];
+const parts: readonly BenchPart[] = [fitBench, memoryFitBench, syncBench, datasetBench];
 
 const log = (line: string) => console.log(`[fieldcurve] ${line}`);
 

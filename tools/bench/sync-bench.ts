@@ -33,7 +33,11 @@ const rounds = 3;
 const warmUpBatches = 3;
 
 /** The environment a real server process needs; only the database is real here. */
-function serverEnv(databaseUrl: string, port: number, secret: string): Record<string, string> {
+export function serverEnv(
+  databaseUrl: string,
+  port: number,
+  secret: string,
+): Record<string, string> {
   return {
     HOST: '127.0.0.1',
     PORT: String(port),
