@@ -114,12 +114,12 @@ export async function previewUpload(
 function guessRole(header: string): ColumnRole {
   const text = header.toLowerCase();
   const guesses: [RegExp, ColumnRole][] = [
+    [/date|day|start/, 'date'],
     [/other|rival|competit|cross/, 'other-price'],
     [/price|tariff/, 'price'],
     [/quantity|units|qty|sales|volume/, 'quantity'],
     [/income/, 'income'],
     [/weight/, 'weight'],
-    [/date|day/, 'date'],
     [/outlet|region|store|shop|week|period|district/, 'grouping'],
     [/instrument|cost/, 'instrument'],
   ];
