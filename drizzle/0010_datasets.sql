@@ -76,3 +76,36 @@ BEGIN
 END $$;--> statement-breakpoint
 CREATE TRIGGER "datasets_drop_table" AFTER DELETE ON "datasets"
   FOR EACH ROW EXECUTE FUNCTION "drop_dataset_table"();
+--> statement-breakpoint
+CREATE TABLE "shelf_observation_rows" (
+	"interview_id" uuid NOT NULL,
+	"study_id" uuid NOT NULL,
+	"block_id" text NOT NULL,
+	"price_minor" double precision NOT NULL,
+	"pack_size" double precision NOT NULL,
+	"quantity" double precision NOT NULL,
+	"period_days" integer,
+	CONSTRAINT "shelf_observation_rows_interview_id_block_id_pk" PRIMARY KEY("interview_id","block_id")
+);
+--> statement-breakpoint
+CREATE INDEX "shelf_observation_rows_study" ON "shelf_observation_rows" USING btree ("study_id");
+--> statement-breakpoint
+-- The typed shelf-observation rows of the given interviews, rebuilt from their answers and the
+-- blocks of the questionnaire version each was taken with (sync calls it for what it stored).
+CREATE FUNCTION "refresh_shelf_observation_rows"(ids uuid[]) RETURNS void LANGUAGE sql AS $$
+  DELETE FROM shelf_observation_rows WHERE interview_id = ANY(ids);
+  INSERT INTO shelf_observation_rows
+    (interview_id, study_id, block_id, price_minor, pack_size, quantity, period_days)
+  SELECT i.id, i.study_id, b->>'id', (a->>'priceMinor')::float8, (a->>'packSize')::float8,
+         (a->>'quantity')::float8, (b->>'periodDays')::integer
+  FROM interviews i
+  JOIN questionnaire_versions v ON v.id = i.questionnaire_version_id
+  CROSS JOIN LATERAL jsonb_array_elements(v.definition->'blocks') AS b
+  CROSS JOIN LATERAL (SELECT i.answers->(b->>'id') AS a) AS answer
+  WHERE i.id = ANY(ids) AND b->>'kind' = 'shelf-observation'
+    AND jsonb_typeof(a) = 'object'
+    AND jsonb_typeof(a->'priceMinor') = 'number' AND jsonb_typeof(a->'packSize') = 'number'
+    AND jsonb_typeof(a->'quantity') = 'number';
+$$;--> statement-breakpoint
+-- What was stored before this migration.
+SELECT refresh_shelf_observation_rows(ARRAY(SELECT id FROM interviews));

@@ -58,7 +58,7 @@ export function datasetModelSpec(
     );
   }
   return {
-    table: { schema: datasetSchema, name: datasetTableName(datasetId) },
+    source: { schema: datasetSchema, name: datasetTableName(datasetId) },
     form: spec.form,
     quantity: byRole('quantity')!,
     price: byRole('price')!,

@@ -15,3 +15,4 @@ export * from './fits';
 export * from './schedule-versions';
 export * from './api-tokens';
 export * from './datasets';
+export * from './shelf-observation-rows';

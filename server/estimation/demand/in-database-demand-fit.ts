@@ -43,7 +43,10 @@ export async function fitDemandInDatabase(
   spec: InDatabaseDemandSpec,
 ): Promise<InDatabaseDemandFit> {
   checkSpec(spec);
-  const table = sql`${sql.identifier(spec.table.schema)}.${sql.identifier(spec.table.name)} AS src`;
+  const table =
+    'query' in spec.source
+      ? sql`(${spec.source.query}) AS src`
+      : sql`${sql.identifier(spec.source.schema)}.${sql.identifier(spec.source.name)} AS src`;
   const logged = spec.form === 'loglog';
   const continuous: ContinuousColumn[] = [
     { column: spec.price, logged },

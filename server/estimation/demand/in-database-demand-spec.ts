@@ -1,3 +1,4 @@
+import type { SQL } from 'drizzle-orm';
 import type { CovariateRole, DemandForm } from '@shared/estimation/least-squares/demand-model-spec';
 import type { InDatabaseStandardErrors } from '../in-database-model-spec';
 
@@ -8,7 +9,8 @@ import type { InDatabaseStandardErrors } from '../in-database-model-spec';
  * the own price (two-stage least squares).
  */
 export interface InDatabaseDemandSpec {
-  readonly table: { readonly schema: string; readonly name: string };
+  /** A stored table, or a query built with drizzle's `sql` template (never concatenated input). */
+  readonly source: { readonly schema: string; readonly name: string } | { readonly query: SQL };
   readonly form: DemandForm;
   readonly quantity: string;
   readonly price: string;
