@@ -22,6 +22,7 @@ import { fieldSyncRouters, syncBodyParser } from './field-sync/field-sync-router
 import { analysisRouters } from './fits/analysis-routers';
 import { rateLimits } from './http/rate-limits';
 import { syncGate } from './field-sync/sync-gate';
+import { datasetsRouter } from './datasets/datasets-router';
 
 /** Builds the whole app without listening, so tests drive it through supertest. */
 export function createApp(deps: AppDependencies) {
@@ -58,6 +59,7 @@ export function createApp(deps: AppDependencies) {
   api.use(fieldRoutesRouter(deps));
   api.use(fieldSyncRouters(deps));
   api.use(analysisRouters(deps));
+  api.use(datasetsRouter(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

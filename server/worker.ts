@@ -3,6 +3,7 @@ import { loadConfig } from './config';
 import { connectDatabase } from './db/database';
 import { createJobBoss, ensureFitQueue, fitQueueName, type FitJobData } from './fits/fit-queue';
 import { runFitJob } from './fits/run-fit-job';
+import { workDatasetJobs } from './datasets/dataset-worker';
 
 /**
  * A fit worker: takes fit jobs from the queue one at a time and runs them. Start as many as the
@@ -20,6 +21,7 @@ await boss.work<FitJobData>(
   { batchSize: 1, pollingIntervalSeconds: 0.5 },
   async ([job]) => runFitJob(db, job.data.fitId, workerId),
 );
+await workDatasetJobs(boss, db);
 console.log(`[fieldcurve-worker] ready ${workerId}`);
 
 // Let the job in hand finish, then release the queue and the database.

@@ -8,6 +8,7 @@ import type { InterviewInsert, PhotoInsert } from './interview-row';
 import { resubmit } from './resubmit-interview';
 import type { PlannedItem, StoredItem as Stored } from './plan-sync-batch';
 import { rejection, type Rejection } from './sync-rejection';
+import { writeShelfObservationRows } from './shelf-observation-rows';
 
 /**
  * Stores new interviews and the photo rows they declare; answers the ids it stored and those the
@@ -58,6 +59,7 @@ export async function storeSyncBatch(
       results.push({ index, id: item.id, outcome: 'accepted', status, resubmitted });
     }
   }
+  await writeShelfObservationRows(tx, results);
   return results;
 }
 

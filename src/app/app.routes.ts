@@ -50,6 +50,12 @@ export const routes: Routes = [
           import('./features/analysis/analysis.routes').then((m) => m.analysisRoutes),
       },
       {
+        path: 'data',
+        canMatch: [roleGuard('researcher')],
+        loadChildren: () =>
+          import('./features/datasets/datasets.routes').then((m) => m.datasetsRoutes),
+      },
+      {
         path: 'reports',
         canMatch: [roleGuard('client')],
         loadChildren: () => import('./features/portal/portal.routes').then((m) => m.portalRoutes),

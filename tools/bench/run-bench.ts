@@ -6,9 +6,10 @@ import { fitBench } from './fit-bench';
 import { memoryFitBench } from './memory-fit-bench';
 import { syncBench } from './sync-bench';
 import { syncLoadBench } from './sync-load-bench';
+import { datasetBench } from './dataset-bench';
 
 /** The parts `npm run bench` runs, in order; `npm run bench -- NAME…` runs only those. */
-const parts: readonly BenchPart[] = [fitBench, memoryFitBench, syncBench, syncLoadBench];
+const parts: readonly BenchPart[] = [fitBench, memoryFitBench, syncBench, syncLoadBench, datasetBench];
 
 const log = (line: string) => console.log(`[fieldcurve] ${line}`);
 

@@ -16,3 +16,5 @@ export * from './schedule-versions';
 export * from './api-tokens';
 export * from './field-devices';
 export * from './rate-limits';
+export * from './datasets';
+export * from './shelf-observation-rows';

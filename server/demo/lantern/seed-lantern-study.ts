@@ -1,4 +1,4 @@
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray, sql } from 'drizzle-orm';
 import { interviews, samplingPoints, studies, studyMembers, users } from '../../db/schema';
 import { demoPeople } from '../demo-people';
 import { lanternInterviews } from './lantern-interviews';
@@ -76,6 +76,9 @@ export async function seedLanternStudy(tx: Tx, organisationId: string): Promise<
   }));
   for (let i = 0; i < rows.length; i += 100)
     await tx.insert(interviews).values(rows.slice(i, i + 100));
+  await tx.execute(
+    sql`SELECT refresh_shelf_observation_rows(ARRAY(SELECT id FROM interviews WHERE study_id = ${study.id}))`,
+  );
 }
 
 async function demoUserIds(tx: Tx) {
