@@ -18,6 +18,7 @@ import { questionnairesRouter } from './questionnaires/questionnaires-router';
 import { studiesRouter } from './studies/studies-router';
 import { fieldSyncRouters, syncBodyParser } from './field-sync/field-sync-routers';
 import { analysisRouters } from './fits/analysis-routers';
+import { rawDataRouter } from './raw-data/raw-data-router';
 
 /** Builds the whole app without listening, so tests drive it through supertest. */
 export function createApp(deps: AppDependencies) {
@@ -48,6 +49,7 @@ export function createApp(deps: AppDependencies) {
   api.use(fieldRoutesRouter(deps));
   api.use(fieldSyncRouters(deps));
   api.use(analysisRouters(deps));
+  api.use(rawDataRouter(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -5,6 +5,7 @@ import { questionnairesAccess } from '../questionnaires/questionnaires-access';
 import { samplingAccess } from '../sampling/sampling-access';
 import { studiesAccess } from '../studies/studies-access';
 import { analysisAccess } from '../fits/analysis-access';
+import { rawDataAccess } from '../raw-data/raw-data-access';
 
 /**
  * Access rules of the study features (studies, questionnaires, sampling points, routes, field
@@ -17,4 +18,5 @@ export const featureAccess: readonly AccessRule[] = [
   ...fieldRoutesAccess,
   ...fieldSyncAccess,
   ...analysisAccess,
+  ...rawDataAccess,
 ];
