@@ -23,6 +23,7 @@ import { analysisRouters } from './fits/analysis-routers';
 import { rateLimits } from './http/rate-limits';
 import { syncGate } from './field-sync/sync-gate';
 import { datasetsRouter } from './datasets/datasets-router';
+import { rawDataRouter } from './raw-data/raw-data-router';
 
 /** Builds the whole app without listening, so tests drive it through supertest. */
 export function createApp(deps: AppDependencies) {
@@ -60,6 +61,7 @@ export function createApp(deps: AppDependencies) {
   api.use(fieldSyncRouters(deps));
   api.use(analysisRouters(deps));
   api.use(datasetsRouter(deps));
+  api.use(rawDataRouter(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -1,10 +1,11 @@
-import { and, asc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, inArray, type SQL } from 'drizzle-orm';
 import type { InterviewFilter } from '@shared/analysis/interview-filter';
 import type { Block } from '@shared/questionnaire/block';
 import type { Executor } from '../db/database';
 import { interviews, questionnaireVersions, samplingPoints, studies } from '../db/schema';
 import { notFound } from '../http/http-error';
 import type { AnalysisInterview } from './analysis-interview';
+import { interviewFilterConditions } from './interview-filter-conditions';
 import type { FitInput } from './run-fit';
 
 /**
@@ -49,14 +50,11 @@ export async function loadFitInput(
 }
 
 function conditions(studyId: string, filter: InterviewFilter): SQL[] {
-  const where: SQL[] = [eq(interviews.studyId, studyId), eq(interviews.status, 'accepted')];
-  const day = sql`(${interviews.finishedAt} at time zone 'UTC')::date`;
-  if (filter.from) where.push(sql`${day} >= ${filter.from}::date`);
-  if (filter.to) where.push(sql`${day} <= ${filter.to}::date`);
-  if (filter.routeIds?.length) where.push(inArray(interviews.routeId, filter.routeIds));
-  if (filter.regions?.length) where.push(inArray(samplingPoints.stratum, filter.regions));
-  if (filter.flagged === 'exclude') where.push(sql`${interviews.flags} = '[]'::jsonb`);
-  return where;
+  return [
+    eq(interviews.studyId, studyId),
+    eq(interviews.status, 'accepted'),
+    ...interviewFilterConditions(filter),
+  ];
 }
 
 async function versionBlocks(db: Executor, ids: string[]): Promise<Map<string, Block[]>> {

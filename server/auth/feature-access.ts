@@ -6,6 +6,7 @@ import { samplingAccess } from '../sampling/sampling-access';
 import { studiesAccess } from '../studies/studies-access';
 import { analysisAccess } from '../fits/analysis-access';
 import { datasetsAccess } from '../datasets/datasets-access';
+import { rawDataAccess } from '../raw-data/raw-data-access';
 
 /**
  * Access rules of the study features (studies, questionnaires, sampling points, routes, field
@@ -19,4 +20,5 @@ export const featureAccess: readonly AccessRule[] = [
   ...fieldSyncAccess,
   ...analysisAccess,
   ...datasetsAccess,
+  ...rawDataAccess,
 ];
