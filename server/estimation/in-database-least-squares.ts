@@ -3,6 +3,7 @@ import type { LinearFit } from '@shared/estimation/least-squares/linear-fit';
 import { classicalFit } from './classical-fit';
 import { inFitSession } from './fit-session';
 import type { FitDatabase, InDatabaseModelSpec, SqlRunner } from './in-database-model-spec';
+import { exactInDatabaseFit } from './exact-in-database-fit';
 import { diagnoseInputs } from './input-diagnosis';
 import { InputProblem, isDataException } from './input-problem';
 import { residualSquares } from './meat-pass';
@@ -15,15 +16,23 @@ import { solveShifted } from './shifted-solution';
 const NEAR_PERFECT_FIT = 1e-3;
 
 /**
+ * Scaled condition number of the float8 XᵀX above which robust errors are taken from exact
+ * numeric sums: the meat's float8 roundings reach the sandwich multiplied by about this much,
+ * so up to it they keep 9+ digits (the design's own condition number is its square root).
+ */
+const EXACT_ROBUST_ABOVE = 1e4;
+
+/**
  * Fits y = Xβ + e by (weighted) least squares where the observations are stored, for studies too
  * large to pull into Node. One aggregate query computes every sum the normal equations need
  * (about a shift near each column's mean, so the products lose no digits to cancellation);
  * Node solves the small system exactly. HC1 and cluster-robust errors take a second aggregate
- * pass over the residuals computed in SQL. Only sums leave the database. Returns the same
+ * pass over the residuals computed in SQL. Designs whose float8 sums fall short (see
+ * exactInDatabaseFit) are summed in exact numeric instead. Only sums leave the database. Returns the same
  * LinearFit as fitLinearModel, and refuses bad input with an EstimationError naming the column:
  * 'missing-column', 'missing-table', 'too-few-observations', 'non-positive-log' (ln of a value
  * ≤ 0), 'invalid-value' (NULL, NaN or infinite values, weights ≤ 0), 'too-few-clusters',
- * 'singular-design', 'ill-conditioned'.
+ * 'singular-design'.
  */
 export async function fitInDatabase(
   db: FitDatabase,
@@ -61,8 +70,20 @@ async function fitPasses(tx: SqlRunner, spec: InDatabaseModelSpec): Promise<Line
     confidenceLevel: spec.confidenceLevel ?? 0.95,
     maxConditionNumber: spec.maxConditionNumber,
   };
-  const base = classicalFit(sums, options);
   const classical = (spec.standardErrors?.type ?? 'classical') === 'classical';
+  let base: LinearFit;
+  try {
+    base = classicalFit(sums, options);
+  } catch (error) {
+    // Float8 sums cannot pin this design down; numeric sums can, exactly.
+    if (error instanceof EstimationError && error.code === 'ill-conditioned') {
+      return exactInDatabaseFit(tx, model, spec, sums.n);
+    }
+    throw error;
+  }
+  if (!classical && base.conditionNumber ** 2 > EXACT_ROBUST_ABOVE) {
+    return exactInDatabaseFit(tx, model, spec, sums.n);
+  }
   const refine = 1 - base.rSquared < NEAR_PERFECT_FIT;
   if (classical && !refine) return base;
   const shifted = solveShifted(sums, model);

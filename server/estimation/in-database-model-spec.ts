@@ -30,7 +30,10 @@ export interface InDatabaseModelSpec {
   readonly standardErrors?: InDatabaseStandardErrors;
   /** Default 0.95. */
   readonly confidenceLevel?: number;
-  /** Refuse when float8 sums cannot pin the coefficients down (scaled condition of XᵀX). */
+  /**
+   * Scaled condition of XᵀX above which float8 sums are not trusted to pin the coefficients
+   * down (default 1e10); such designs are summed in exact numeric instead.
+   */
   readonly maxConditionNumber?: number;
 }
 
