@@ -4,6 +4,7 @@ import { EstimationError } from '@shared/estimation/estimation-error';
 import { kishDesignEffect } from '@shared/estimation/weighting/design-effect';
 import { rake } from '@shared/estimation/weighting/raking';
 import { respondentIds, type AnalysisDataset } from './analysis-dataset';
+import { largest, smallest } from '@shared/estimation/numerics/extent';
 
 export interface RespondentWeights {
   /** Raking weight per respondent (interview id), scaled to sum to the number of respondents. */
@@ -46,8 +47,8 @@ export function respondentWeights(
       weightCv: effect.weightCv,
       iterations: raked.iterations,
       maxMarginError: raked.maxMarginError,
-      minWeight: Math.min(...raked.weights),
-      maxWeight: Math.max(...raked.weights),
+      minWeight: smallest(raked.weights),
+      maxWeight: largest(raked.weights),
     },
   };
 }

@@ -1,3 +1,4 @@
+import { smallest } from '../estimation/numerics/extent';
 /** No published cell may rest on fewer respondents than this (the product's privacy rule). */
 export const minimumCellRespondents = 5;
 
@@ -39,9 +40,9 @@ export function cellSupport(
         ranged.length + pointed.filter((e) => e.points?.some((p) => levels.includes(p))).length
       );
     }
-    const distance = Math.min(...designLevels.map((level) => Math.abs(level - price)));
+    const distance = smallest(designLevels.map((level) => Math.abs(level - price)));
     const nearest = designLevels.filter((level) => Math.abs(level - price) === distance);
-    return ranged.length + Math.min(...nearest.map(askedAt));
+    return ranged.length + smallest(nearest.map(askedAt));
   });
 }
 

@@ -1,3 +1,4 @@
+import { largest } from '../numerics/extent';
 /**
  * The sandwich B·M·B with B = (XᵀX)⁻¹ and the meat M = Σ_g s_g·s_gᵀ, where s_g sums the scores
  * xᵢ·eᵢ over the rows of group g (each row its own group when `groups` is null, i.e. HC0).
@@ -29,7 +30,7 @@ function groupScores(
   residuals: Float64Array,
   groups: readonly number[],
 ): Float64Array[] {
-  const count = Math.max(...groups) + 1;
+  const count = largest(groups) + 1;
   const scores = Array.from({ length: count }, () => new Float64Array(columns.length));
   residuals.forEach((e, i) => {
     const score = scores[groups[i]];

@@ -2,6 +2,7 @@ import type { FittedDemandCurve } from '../demand-schedule/fitted-demand-curve';
 import { EstimationError } from '../estimation-error';
 import { percentileBootstrap, type BootstrapInterval, type BootstrapOptions } from './bootstrap';
 import { weightedMean, weightedMedian } from './weighted-quantiles';
+import { largest, smallest } from '../numerics/extent';
 
 export interface OpenEndedWtpSpec extends BootstrapOptions {
   /** Stated maximum willingness to pay, one per respondent, ≥ 0. */
@@ -63,14 +64,14 @@ export function empiricalWtpCurve(
   weights: readonly number[],
 ): FittedDemandCurve {
   const total = weights.reduce((s, w) => s + w, 0);
-  const max = Math.max(...wtp);
+  const max = largest(wtp);
   return {
     description: 'share with stated WTP at or above the price',
     method: 'open-ended willingness to pay',
     quantityKind: 'share',
     quantity: (price) => wtp.reduce((s, v, i) => s + (v >= price ? weights[i] : 0), 0) / total,
     priceRange: { min: 0, max },
-    observedPriceRange: { min: Math.min(...wtp), max },
+    observedPriceRange: { min: smallest(wtp), max },
     n: wtp.length,
     discrete: true,
     steps: [...new Set(wtp)].sort((a, b) => a - b),
