@@ -14,3 +14,4 @@ export * from './interview-photos';
 export * from './fits';
 export * from './schedule-versions';
 export * from './api-tokens';
+export * from './stated-answer-rows';

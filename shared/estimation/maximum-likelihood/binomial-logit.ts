@@ -11,6 +11,12 @@ export interface BinomialLogitData {
   readonly weights?: readonly number[];
   /** Cluster labels (e.g. respondent) for the cluster-robust covariance; none: one per row. */
   readonly clusters?: readonly (string | number)[];
+  /**
+   * Respondents each cluster stands for (per row, the same on every row of a cluster; default
+   * 1): a cluster of m identical respondents whose rows carry m times one respondent's weight.
+   * Its score is m·s, and the m respondents add m·s·sᵀ = (m·s)(m·s)ᵀ/m to the meat.
+   */
+  readonly clusterSizes?: readonly number[];
 }
 
 export interface BinomialLogitFit {
@@ -99,24 +105,25 @@ function clusterSandwich(
   b: number,
   bread: number[][],
 ): { covariance: number[][]; clusters: number } {
-  const scores = new Map<string | number, [number, number]>();
+  const scores = new Map<string | number, [number, number, number]>();
   data.x.forEach((xi, i) => {
     const key = data.clusters?.[i] ?? i;
     const r = w[i] * (data.y[i] - logistic(a + b * xi));
-    const s = scores.get(key) ?? [0, 0];
-    scores.set(key, [s[0] + r, s[1] + r * xi]);
+    const s = scores.get(key) ?? [0, 0, data.clusterSizes?.[i] ?? 1];
+    scores.set(key, [s[0] + r, s[1] + r * xi, s[2]]);
   });
-  const g = scores.size;
+  let g = 0;
+  for (const [, , size] of scores.values()) g += size;
   if (g < 2)
     throw new EstimationError('too-few-observations', 'need at least two clusters', 'respondent');
   const meat = [
     [0, 0],
     [0, 0],
   ];
-  for (const [s0, s1] of scores.values()) {
-    meat[0][0] += s0 * s0;
-    meat[0][1] += s0 * s1;
-    meat[1][1] += s1 * s1;
+  for (const [s0, s1, size] of scores.values()) {
+    meat[0][0] += (s0 * s0) / size;
+    meat[0][1] += (s0 * s1) / size;
+    meat[1][1] += (s1 * s1) / size;
   }
   meat[1][0] = meat[0][1];
   const factor = g / (g - 1);
