@@ -9,6 +9,8 @@ CREATE TABLE "stated_bid_answers" (
 	"route_id" uuid,
 	"point_id" uuid,
 	"finished_at" timestamp with time zone NOT NULL,
+	"status" "interview_status" NOT NULL,
+	"flagged" boolean NOT NULL,
 	"income_band" text,
 	"household_people" integer,
 	"bounds" text NOT NULL,
@@ -30,11 +32,23 @@ CREATE TABLE "stated_card_intervals" (
 	"route_id" uuid,
 	"point_id" uuid,
 	"finished_at" timestamp with time zone NOT NULL,
+	"status" "interview_status" NOT NULL,
+	"flagged" boolean NOT NULL,
 	"income_band" text,
 	"household_people" integer,
 	"lower_minor" bigint NOT NULL,
 	"upper_minor" bigint,
 	CONSTRAINT "stated_card_intervals_interview_id_block_id_pk" PRIMARY KEY("interview_id","block_id")
+);
+--> statement-breakpoint
+CREATE TABLE "stated_interviews" (
+	"interview_id" uuid PRIMARY KEY NOT NULL,
+	"study_id" uuid NOT NULL,
+	"route_id" uuid,
+	"point_id" uuid,
+	"finished_at" timestamp with time zone NOT NULL,
+	"status" "interview_status" NOT NULL,
+	"flagged" boolean NOT NULL
 );
 --> statement-breakpoint
 CREATE TABLE "stated_ladder_steps" (
@@ -48,6 +62,8 @@ CREATE TABLE "stated_ladder_steps" (
 	"route_id" uuid,
 	"point_id" uuid,
 	"finished_at" timestamp with time zone NOT NULL,
+	"status" "interview_status" NOT NULL,
+	"flagged" boolean NOT NULL,
 	"income_band" text,
 	"household_people" integer,
 	"scale" text NOT NULL,
@@ -67,6 +83,8 @@ CREATE TABLE "stated_thresholds" (
 	"route_id" uuid,
 	"point_id" uuid,
 	"finished_at" timestamp with time zone NOT NULL,
+	"status" "interview_status" NOT NULL,
+	"flagged" boolean NOT NULL,
 	"income_band" text,
 	"household_people" integer,
 	"too_cheap_minor" bigint NOT NULL,
@@ -89,19 +107,17 @@ CREATE TABLE "stated_wtp_amounts" (
 	"route_id" uuid,
 	"point_id" uuid,
 	"finished_at" timestamp with time zone NOT NULL,
+	"status" "interview_status" NOT NULL,
+	"flagged" boolean NOT NULL,
 	"income_band" text,
 	"household_people" integer,
 	"amount_minor" bigint NOT NULL,
 	CONSTRAINT "stated_wtp_amounts_interview_id_block_id_pk" PRIMARY KEY("interview_id","block_id")
 );
 --> statement-breakpoint
-ALTER TABLE "stated_bid_answers" ADD CONSTRAINT "stated_bid_answers_interview_id_interviews_id_fk" FOREIGN KEY ("interview_id") REFERENCES "public"."interviews"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
-ALTER TABLE "stated_card_intervals" ADD CONSTRAINT "stated_card_intervals_interview_id_interviews_id_fk" FOREIGN KEY ("interview_id") REFERENCES "public"."interviews"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
-ALTER TABLE "stated_ladder_steps" ADD CONSTRAINT "stated_ladder_steps_interview_id_interviews_id_fk" FOREIGN KEY ("interview_id") REFERENCES "public"."interviews"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
-ALTER TABLE "stated_thresholds" ADD CONSTRAINT "stated_thresholds_interview_id_interviews_id_fk" FOREIGN KEY ("interview_id") REFERENCES "public"."interviews"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
-ALTER TABLE "stated_wtp_amounts" ADD CONSTRAINT "stated_wtp_amounts_interview_id_interviews_id_fk" FOREIGN KEY ("interview_id") REFERENCES "public"."interviews"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX "stated_bid_answers_study" ON "stated_bid_answers" USING btree ("study_id","block_rank","block_id");--> statement-breakpoint
 CREATE INDEX "stated_card_intervals_study" ON "stated_card_intervals" USING btree ("study_id","block_rank","block_id");--> statement-breakpoint
+CREATE INDEX "stated_interviews_study" ON "stated_interviews" USING btree ("study_id","status");--> statement-breakpoint
 CREATE INDEX "stated_ladder_steps_study" ON "stated_ladder_steps" USING btree ("study_id","block_rank","block_id");--> statement-breakpoint
 CREATE INDEX "stated_thresholds_study" ON "stated_thresholds" USING btree ("study_id","block_rank","block_id");--> statement-breakpoint
 CREATE INDEX "stated_wtp_amounts_study" ON "stated_wtp_amounts" USING btree ("study_id","block_rank","block_id");--> statement-breakpoint
@@ -109,20 +125,27 @@ CREATE INDEX "stated_wtp_amounts_study" ON "stated_wtp_amounts" USING btree ("st
 -- questionnaire version, set by set: one function writes them for any list of interviews,
 -- called by the statement-level triggers below (sync's COPY or INSERT, a correction's UPDATE,
 -- fixtures and seeds alike, always in the statement that stores the interview) and once here
--- for every interview already stored. Deleting an interview deletes its rows (ON DELETE CASCADE).
+-- for every interview already stored; deleting interviews deletes their rows (the last trigger).
 CREATE FUNCTION write_stated_answer_rows(ids uuid[]) RETURNS void LANGUAGE plpgsql AS $$
 BEGIN
-  DELETE FROM stated_ladder_steps WHERE interview_id = ANY (ids);
-  DELETE FROM stated_thresholds WHERE interview_id = ANY (ids);
-  DELETE FROM stated_wtp_amounts WHERE interview_id = ANY (ids);
-  DELETE FROM stated_card_intervals WHERE interview_id = ANY (ids);
-  DELETE FROM stated_bid_answers WHERE interview_id = ANY (ids);
+  -- IN (SELECT unnest(…)) rather than = ANY (…): a hashed semi-join, not a scan of the whole
+  -- list for every row (a batch or a backfill passes many ids).
+  DELETE FROM stated_interviews WHERE interview_id IN (SELECT unnest(ids));
+  DELETE FROM stated_ladder_steps WHERE interview_id IN (SELECT unnest(ids));
+  DELETE FROM stated_thresholds WHERE interview_id IN (SELECT unnest(ids));
+  DELETE FROM stated_wtp_amounts WHERE interview_id IN (SELECT unnest(ids));
+  DELETE FROM stated_card_intervals WHERE interview_id IN (SELECT unnest(ids));
+  DELETE FROM stated_bid_answers WHERE interview_id IN (SELECT unnest(ids));
+
+  INSERT INTO stated_interviews
+  SELECT id, study_id, route_id, point_id, finished_at, status, flags <> '[]'::jsonb
+  FROM interviews WHERE id IN (SELECT unnest(ids));
 
   CREATE TEMP TABLE IF NOT EXISTS stated_answered_blocks (
     interview_id uuid, study_id uuid, questionnaire_version_id uuid, block_id text,
     block_rank smallint, kind text, block jsonb, answer jsonb, respondent_key text,
     enumerator_id uuid, route_id uuid, point_id uuid, finished_at timestamptz,
-    income_band text, household_people integer
+    status interview_status, flagged boolean, income_band text, household_people integer
   ) ON COMMIT DROP;
   TRUNCATE stated_answered_blocks;
 
@@ -130,7 +153,7 @@ BEGIN
   -- each block's rank among the blocks of its kind, and the first income-band and
   -- household-size blocks that raking reads.
   WITH iv AS (
-    SELECT * FROM interviews WHERE id = ANY (ids)
+    SELECT * FROM interviews WHERE id IN (SELECT unnest(ids))
   ), version_blocks AS (
     SELECT qv.id AS version_id, b.block, b.ord,
            (row_number() OVER (PARTITION BY qv.id, b.block->>'kind' ORDER BY b.ord) - 1)::smallint AS block_rank
@@ -155,7 +178,7 @@ BEGIN
   SELECT iv.id, iv.study_id, iv.questionnaire_version_id, vb.block->>'id', vb.block_rank,
          vb.block->>'kind', vb.block, iv.answers->(vb.block->>'id'), iv.respondent_key,
          iv.enumerator_id, iv.route_id, iv.point_id, iv.finished_at,
-         p.income_band, p.household_people
+         iv.status, iv.flags <> '[]'::jsonb, p.income_band, p.household_people
   FROM iv
   JOIN version_blocks vb ON vb.version_id = iv.questionnaire_version_id
   JOIN profiles p ON p.id = iv.id
@@ -166,7 +189,7 @@ BEGIN
   INSERT INTO stated_ladder_steps
   SELECT a.interview_id, a.study_id, a.questionnaire_version_id, a.block_id, a.block_rank,
          a.respondent_key, a.enumerator_id, a.route_id, a.point_id, a.finished_at,
-         a.income_band, a.household_people, a.block->>'scale',
+         a.status, a.flagged, a.income_band, a.household_people, a.block->>'scale',
          (step->>'priceMinor')::bigint,
          CASE WHEN jsonb_typeof(step->'response') = 'number' THEN (step->>'response')::smallint
               WHEN step->>'response' = 'yes' THEN 1 ELSE 0 END
@@ -177,7 +200,7 @@ BEGIN
   INSERT INTO stated_thresholds
   SELECT a.interview_id, a.study_id, a.questionnaire_version_id, a.block_id, a.block_rank,
          a.respondent_key, a.enumerator_id, a.route_id, a.point_id, a.finished_at,
-         a.income_band, a.household_people,
+         a.status, a.flagged, a.income_band, a.household_people,
          (a.answer->>'tooCheapMinor')::bigint, (a.answer->>'cheapMinor')::bigint,
          (a.answer->>'expensiveMinor')::bigint, (a.answer->>'tooExpensiveMinor')::bigint,
          (a.answer->>'likelihoodCheap')::smallint, (a.answer->>'likelihoodExpensive')::smallint
@@ -186,7 +209,7 @@ BEGIN
   INSERT INTO stated_wtp_amounts
   SELECT a.interview_id, a.study_id, a.questionnaire_version_id, a.block_id, a.block_rank,
          a.respondent_key, a.enumerator_id, a.route_id, a.point_id, a.finished_at,
-         a.income_band, a.household_people, (a.answer->>'amountMinor')::bigint
+         a.status, a.flagged, a.income_band, a.household_people, (a.answer->>'amountMinor')::bigint
   FROM stated_answered_blocks a WHERE a.kind = 'wtp-open';
 
   -- The card interval: from the highest amount they would pay up to the next amount on the
@@ -194,7 +217,7 @@ BEGIN
   INSERT INTO stated_card_intervals
   SELECT a.interview_id, a.study_id, a.questionnaire_version_id, a.block_id, a.block_rank,
          a.respondent_key, a.enumerator_id, a.route_id, a.point_id, a.finished_at,
-         a.income_band, a.household_people,
+         a.status, a.flagged, a.income_band, a.household_people,
          CASE WHEN k.k < 0 THEN 0 ELSE (a.block->'amountsMinor'->>k.k)::bigint END,
          (a.block->'amountsMinor'->>(k.k + 1))::bigint
   FROM stated_answered_blocks a
@@ -207,7 +230,7 @@ BEGIN
   INSERT INTO stated_bid_answers
   SELECT a.interview_id, a.study_id, a.questionnaire_version_id, a.block_id, a.block_rank,
          a.respondent_key, a.enumerator_id, a.route_id, a.point_id, a.finished_at,
-         a.income_band, a.household_people, a.block->>'bounds',
+         a.status, a.flagged, a.income_band, a.household_people, a.block->>'bounds',
          (a.answer->>'bidMinor')::bigint, a.answer->>'firstResponse' = 'yes',
          CASE WHEN a.block->>'bounds' = 'double' THEN (a.answer->>'followUpMinor')::bigint END,
          CASE WHEN a.block->>'bounds' = 'double' AND a.answer ? 'secondResponse'
@@ -228,16 +251,16 @@ CREATE TRIGGER interviews_stated_answer_rows_insert AFTER INSERT ON interviews
   FOR EACH STATEMENT EXECUTE FUNCTION interviews_write_stated_answer_rows();
 --> statement-breakpoint
 -- A correction replaces the answers (and may move the interview): its rows are written again.
--- Review changes only status, flags and notes, which fits read from the interview itself, so
--- an update that leaves the copied columns alone rewrites nothing.
+-- Review changes the status (and so what filters match): the rows are written again too. An
+-- update that leaves every copied column alone (a note, a photo arriving) rewrites nothing.
 CREATE FUNCTION interviews_rewrite_stated_answer_rows() RETURNS trigger LANGUAGE plpgsql AS $$
 BEGIN
   PERFORM write_stated_answer_rows(ARRAY(
     SELECT n.id FROM changed_interviews n JOIN previous_interviews o ON o.id = n.id
     WHERE (n.answers, n.questionnaire_version_id, n.study_id, n.route_id, n.point_id,
-           n.enumerator_id, n.finished_at, n.respondent_key)
+           n.enumerator_id, n.finished_at, n.respondent_key, n.status, n.flags)
       IS DISTINCT FROM (o.answers, o.questionnaire_version_id, o.study_id, o.route_id,
-           o.point_id, o.enumerator_id, o.finished_at, o.respondent_key)));
+           o.point_id, o.enumerator_id, o.finished_at, o.respondent_key, o.status, o.flags)));
   RETURN NULL;
 END;
 $$;
@@ -245,5 +268,21 @@ $$;
 CREATE TRIGGER interviews_stated_answer_rows_update AFTER UPDATE ON interviews
   REFERENCING OLD TABLE AS previous_interviews NEW TABLE AS changed_interviews
   FOR EACH STATEMENT EXECUTE FUNCTION interviews_rewrite_stated_answer_rows();
+--> statement-breakpoint
+CREATE FUNCTION interviews_delete_stated_answer_rows() RETURNS trigger LANGUAGE plpgsql AS $$
+BEGIN
+  DELETE FROM stated_interviews WHERE interview_id IN (SELECT id FROM removed_interviews);
+  DELETE FROM stated_ladder_steps WHERE interview_id IN (SELECT id FROM removed_interviews);
+  DELETE FROM stated_thresholds WHERE interview_id IN (SELECT id FROM removed_interviews);
+  DELETE FROM stated_wtp_amounts WHERE interview_id IN (SELECT id FROM removed_interviews);
+  DELETE FROM stated_card_intervals WHERE interview_id IN (SELECT id FROM removed_interviews);
+  DELETE FROM stated_bid_answers WHERE interview_id IN (SELECT id FROM removed_interviews);
+  RETURN NULL;
+END;
+$$;
+--> statement-breakpoint
+CREATE TRIGGER interviews_stated_answer_rows_delete AFTER DELETE ON interviews
+  REFERENCING OLD TABLE AS removed_interviews
+  FOR EACH STATEMENT EXECUTE FUNCTION interviews_delete_stated_answer_rows();
 --> statement-breakpoint
 SELECT write_stated_answer_rows(ARRAY(SELECT id FROM interviews));

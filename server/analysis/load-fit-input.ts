@@ -48,8 +48,7 @@ export async function loadFitInput(
   return { interviews: matched, currency: study.currency };
 }
 
-/** The filters as conditions on `interviews` (and `sampling_points` joined on its point). */
-export function conditions(studyId: string, filter: InterviewFilter): SQL[] {
+function conditions(studyId: string, filter: InterviewFilter): SQL[] {
   const where: SQL[] = [eq(interviews.studyId, studyId), eq(interviews.status, 'accepted')];
   const day = sql`(${interviews.finishedAt} at time zone 'UTC')::date`;
   if (filter.from) where.push(sql`${day} >= ${filter.from}::date`);

@@ -1,6 +1,6 @@
-import { and, sql, type SQL } from 'drizzle-orm';
+import { sql, type SQL } from 'drizzle-orm';
 import type { FitSpec } from '@shared/analysis/fit-spec';
-import { conditions } from '../load-fit-input';
+import { statedFilter } from './stated-filter';
 import type { StatedMethod } from './stated-cell';
 import { statedTables } from './stated-tables';
 
@@ -36,7 +36,7 @@ export function statedCellsQuery(studyId: string, spec: FitSpec & { method: Stat
     ? sql.raw('sampling_points.stratum AS region, s.income_band, s.household_people')
     : sql.raw('NULL::text AS region, NULL::text AS income_band, NULL::integer AS household_people');
   const block = spec.blockId ? sql`s.block_id = ${spec.blockId}` : sql`s.block_rank = 0`;
-  const filters = and(...conditions(studyId, spec.filters));
+  const filters = statedFilter(studyId, spec.filters);
   const answerColumns = sql.join(
     table.columns.map((c) => sql`${c.expression} AS ${sql.identifier(c.name)}`),
     sql`, `,
@@ -54,9 +54,8 @@ export function statedCellsQuery(studyId: string, spec: FitSpec & { method: Stat
     WITH per AS MATERIALIZED (
       SELECT s.interview_id, s.questionnaire_version_id, s.block_id, ${answerColumns}, ${levels}
       FROM ${table.table} s
-      JOIN interviews ON interviews.id = s.interview_id
-      LEFT JOIN sampling_points ON sampling_points.id = interviews.point_id
-      WHERE s.study_id = ${studyId} AND ${block} AND ${filters}
+      LEFT JOIN sampling_points ON sampling_points.id = s.point_id
+      WHERE ${block} AND ${filters}
       ${perRespondent}
     ), cells AS (
       SELECT ${names}, region, income_band, household_people, count(*)::int AS n
@@ -69,7 +68,7 @@ export function statedCellsQuery(studyId: string, spec: FitSpec & { method: Stat
        FROM per) AS hash,
       (SELECT coalesce(jsonb_agg(DISTINCT jsonb_build_array(questionnaire_version_id, block_id)), '[]'::jsonb)
        FROM per) AS blocks,
-      (SELECT count(*)::int FROM interviews
-       LEFT JOIN sampling_points ON sampling_points.id = interviews.point_id
+      (SELECT count(*)::int FROM stated_interviews s
+       LEFT JOIN sampling_points ON sampling_points.id = s.point_id
        WHERE ${filters}) AS matched`;
 }

@@ -10,20 +10,20 @@ import {
   timestamp,
   uuid,
 } from 'drizzle-orm/pg-core';
-import { interviews } from './interviews';
+import { interviewStatusEnum } from './interviews';
 
 /**
  * What every typed analysis row carries of its interview: where it belongs, who and where it
  * was taken, which block of which questionnaire version it answers (`blockRank` 0 is the first
  * block of its kind, the one a fit reads when it names none), and the two answers raking reads
- * (income band, household size). Written from the interview's answers by the trigger of
+ * (income band, household size), with the review state and flags filters read. Written from the interview's answers by the trigger of
  * drizzle/0011 in the same statement that stores or corrects the interview, so a fit reads
  * typed columns and never the answers' JSON.
  */
 const interviewColumns = () => ({
-  interviewId: uuid()
-    .notNull()
-    .references(() => interviews.id, { onDelete: 'cascade' }),
+  // No row-level foreign key: these rows are written and deleted with their interview by the
+  // statement-level triggers of drizzle/0011, millions at a time when a study is large.
+  interviewId: uuid().notNull(),
   studyId: uuid().notNull(),
   questionnaireVersionId: uuid().notNull(),
   blockId: text().notNull(),
@@ -33,9 +33,30 @@ const interviewColumns = () => ({
   routeId: uuid(),
   pointId: uuid(),
   finishedAt: timestamp({ withTimezone: true }).notNull(),
+  /** The interview's review state and whether it carries quality flags, as analysis filters them. */
+  status: interviewStatusEnum().notNull(),
+  flagged: boolean().notNull(),
   incomeBand: text(),
   householdPeople: integer(),
 });
+
+/**
+ * Every interview once, with what analysis filters read: how many interviews a fit's filters
+ * match, counted without reading the interviews' answers.
+ */
+export const statedInterviews = pgTable(
+  'stated_interviews',
+  {
+    interviewId: uuid().primaryKey(),
+    studyId: uuid().notNull(),
+    routeId: uuid(),
+    pointId: uuid(),
+    finishedAt: timestamp({ withTimezone: true }).notNull(),
+    status: interviewStatusEnum().notNull(),
+    flagged: boolean().notNull(),
+  },
+  (t) => [index('stated_interviews_study').on(t.studyId, t.status)],
+);
 
 /** One row per ladder step answered: the price asked and the answer (1/0, or intent 1–5). */
 export const statedLadderSteps = pgTable(
