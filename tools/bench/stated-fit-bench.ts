@@ -98,7 +98,9 @@ async function measure(
     }
     return figures;
   } finally {
-    await db.delete(studies).where(eq(studies.id, studyId));
+    // The bench's database is made afresh for every run and dropped after it.
+    await db.execute(sql`TRUNCATE stated_ladder_steps, stated_thresholds, stated_wtp_amounts,
+      stated_card_intervals, stated_bid_answers, stated_interviews`);
   }
 }
 

@@ -44,7 +44,8 @@ export function buildThresholdCurves(answers: readonly ThresholdAnswer[]): Thres
   // Weight strictly below p = weight at or below the previous price.
   const atOrAbove = (field: 'tooCheap' | 'cheap') => {
     const cumulative = atOrBelow(field);
-    return prices.map((_, i) => (total - (i === 0 ? 0 : cumulative[i - 1])) / total);
+    // Never below 0 where every weight is below the price (rounding of total − weight).
+    return prices.map((_, i) => Math.max(0, total - (i === 0 ? 0 : cumulative[i - 1])) / total);
   };
   const cheap = atOrAbove('cheap');
   const expensive = atOrBelow('expensive').map((w) => w / total);
