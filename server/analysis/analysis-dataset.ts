@@ -15,14 +15,23 @@ export interface ObservedRow {
   readonly peerPrice: number | null;
 }
 
-export interface LadderRow {
+/**
+ * A stated-preference row is one respondent, or — read from a study's frequency table — one
+ * cell of `count` respondents who answered alike (and share raking levels); its `interviewId`
+ * then names the cell, and its weight is count × one respondent's weight.
+ */
+interface Tabulated {
+  readonly count?: number;
+}
+
+export interface LadderRow extends Tabulated {
   readonly interviewId: string;
   readonly scale: 'yes-no' | 'intent-5';
   /** buy: 1/0 on the yes/no scale, 1–5 on the intent scale. */
   readonly steps: readonly { readonly price: number; readonly buy: number }[];
 }
 
-export interface ThresholdRow {
+export interface ThresholdRow extends Tabulated {
   readonly interviewId: string;
   readonly tooCheap: number;
   readonly cheap: number;
@@ -32,19 +41,19 @@ export interface ThresholdRow {
   readonly likelihoodExpensive: number | null;
 }
 
-export interface WtpOpenRow {
+export interface WtpOpenRow extends Tabulated {
   readonly interviewId: string;
   readonly amount: number;
 }
 
 /** WTP in [lower, upper); upper null for the open top interval. */
-export interface CardRow {
+export interface CardRow extends Tabulated {
   readonly interviewId: string;
   readonly lower: number;
   readonly upper: number | null;
 }
 
-export interface BidRow {
+export interface BidRow extends Tabulated {
   readonly interviewId: string;
   readonly bid: number;
   readonly yes: boolean;
@@ -77,6 +86,9 @@ export interface AnalysisDataset<M extends AnalysisMethod = AnalysisMethod> {
   readonly interviewsMatched: number;
   readonly skipped: readonly { reason: string; count: number }[];
 }
+
+/** Respondents a row stands for: 1, or a frequency-table cell's count. */
+export const respondentsOf = (row: { readonly count?: number }): number => row.count ?? 1;
 
 /** Respondents in the order of their first row. */
 export function respondentIds(dataset: AnalysisDataset): string[] {

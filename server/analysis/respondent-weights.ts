@@ -3,7 +3,8 @@ import type { WeightingSpec } from '@shared/analysis/weighting-spec';
 import { EstimationError } from '@shared/estimation/estimation-error';
 import { kishDesignEffect } from '@shared/estimation/weighting/design-effect';
 import { rake } from '@shared/estimation/weighting/raking';
-import { respondentIds, type AnalysisDataset } from './analysis-dataset';
+import { respondentIds, respondentsOf, type AnalysisDataset } from './analysis-dataset';
+import { largest, smallest } from '@shared/estimation/numerics/extent';
 
 export interface RespondentWeights {
   /** Raking weight per respondent (interview id), scaled to sum to the number of respondents. */
@@ -27,6 +28,10 @@ export function respondentWeights(
       'no respondents are left to weight',
       'weighting',
     );
+  const countOf = new Map<string, number>();
+  for (const row of dataset.rows)
+    countOf.set(row.interviewId, 'count' in row ? respondentsOf(row) : 1);
+  const counts = ids.map((id) => countOf.get(id) ?? 1);
   const variables: Record<string, string[]> = {};
   const targets: Record<string, Record<string, number>> = {};
   for (const margin of weighting.margins) {
@@ -34,8 +39,8 @@ export function respondentWeights(
     targets[margin.variable] = margin.targets;
     refuseEmptiedLevels(margin.variable, variables[margin.variable], margin.targets);
   }
-  const raked = rakeExplained(variables, targets, weighting.maxIterations ?? 100);
-  const effect = kishDesignEffect(raked.weights);
+  const raked = rakeExplained(variables, targets, counts, weighting.maxIterations ?? 100);
+  const effect = kishDesignEffect(raked.weights, counts);
   return {
     byRespondent: new Map(ids.map((id, i) => [id, raked.weights[i]])),
     summary: {
@@ -46,8 +51,8 @@ export function respondentWeights(
       weightCv: effect.weightCv,
       iterations: raked.iterations,
       maxMarginError: raked.maxMarginError,
-      minWeight: Math.min(...raked.weights),
-      maxWeight: Math.max(...raked.weights),
+      minWeight: smallest(raked.weights),
+      maxWeight: largest(raked.weights),
     },
   };
 }
@@ -55,6 +60,14 @@ export function respondentWeights(
 /** The weight of a respondent, 1 when unweighted. */
 export function weightOf(weights: RespondentWeights | null, interviewId: string): number {
   return weights?.byRespondent.get(interviewId) ?? 1;
+}
+
+/** The weight a row carries: its respondent's weight, times the respondents a cell stands for. */
+export function rowWeight(
+  weights: RespondentWeights | null,
+  row: { readonly interviewId: string; readonly count?: number },
+): number {
+  return weightOf(weights, row.interviewId) * respondentsOf(row);
 }
 
 /** A level with respondents but a zero target would get weight 0: say so rather than divide by it. */
@@ -78,10 +91,11 @@ function refuseEmptiedLevels(
 function rakeExplained(
   variables: Record<string, string[]>,
   targets: Record<string, Record<string, number>>,
+  counts: readonly number[],
   maxIterations: number,
 ) {
   try {
-    return rake({ variables, targets, maxIterations, tolerance: 1e-9 });
+    return rake({ variables, targets, counts, maxIterations, tolerance: 1e-9 });
   } catch (error) {
     if (!(error instanceof EstimationError) || error.code !== 'not-converged') throw error;
     throw new EstimationError(

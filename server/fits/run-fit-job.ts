@@ -6,6 +6,7 @@ import { fitSpecSchema } from '@shared/analysis/fit-spec';
 import { EstimationError } from '@shared/estimation/estimation-error';
 import { loadFitInput } from '../analysis/load-fit-input';
 import { estimateFit, prepareFit } from '../analysis/run-fit';
+import { isStated, prepareTabulatedFit } from '../analysis/tabulated/prepare-tabulated-fit';
 import type { Database } from '../db/database';
 import { fits } from '../db/schema';
 
@@ -37,9 +38,12 @@ export async function runFitJob(db: Database, fitId: string, workerId: string): 
       .where(notDone);
   try {
     const spec = fitSpecSchema.parse(claimed.spec);
-    const input = await loadFitInput(db, claimed.studyId, spec.filters);
+    // Stated-preference methods fit from the frequency table the database sums up; the
+    // observed-price fit still reads its matched interviews.
+    const prepared = isStated(spec)
+      ? await prepareTabulatedFit(db, claimed.studyId, spec)
+      : prepareFit(await loadFitInput(db, claimed.studyId, spec.filters), spec);
     await progress(30);
-    const prepared = prepareFit(input, spec);
     await progress(50, prepared.dataHash);
     const result = estimateFit(prepared, spec);
     await progress(90);

@@ -1,3 +1,4 @@
+import { smallest } from '../estimation/numerics/extent';
 /** No published cell may rest on fewer respondents than this (the product's privacy rule). */
 export const minimumCellRespondents = 5;
 
@@ -8,7 +9,12 @@ export const minimumCellRespondents = 5;
 export interface RespondentEvidence {
   readonly points?: readonly number[];
   readonly range?: { readonly low: number; readonly high: number };
+  /** Respondents with exactly this evidence (default 1): a frequency table's cell. */
+  readonly count?: number;
 }
+
+const respondentsIn = (evidence: readonly RespondentEvidence[]) =>
+  evidence.reduce((s, e) => s + (e.count ?? 1), 0);
 
 /**
  * How many respondents each grid price of a schedule rests on. The rule:
@@ -31,17 +37,20 @@ export function cellSupport(
     const inCell = (p: number) => p >= low && (last ? p <= high : p < high);
     const ranged = evidence.filter((e) => e.range && e.range.low <= price && price <= e.range.high);
     const pointed = evidence.filter((e) => !e.range);
-    if (!designLevels) return ranged.length + pointed.filter((e) => e.points?.some(inCell)).length;
+    if (!designLevels)
+      return respondentsIn(ranged) + respondentsIn(pointed.filter((e) => e.points?.some(inCell)));
     const levels = designLevels.filter(inCell);
-    const askedAt = (level: number) => pointed.filter((e) => e.points?.includes(level)).length;
+    const askedAt = (level: number) =>
+      respondentsIn(pointed.filter((e) => e.points?.includes(level)));
     if (levels.length > 0) {
       return (
-        ranged.length + pointed.filter((e) => e.points?.some((p) => levels.includes(p))).length
+        respondentsIn(ranged) +
+        respondentsIn(pointed.filter((e) => e.points?.some((p) => levels.includes(p))))
       );
     }
-    const distance = Math.min(...designLevels.map((level) => Math.abs(level - price)));
+    const distance = smallest(designLevels.map((level) => Math.abs(level - price)));
     const nearest = designLevels.filter((level) => Math.abs(level - price) === distance);
-    return ranged.length + Math.min(...nearest.map(askedAt));
+    return respondentsIn(ranged) + smallest(nearest.map(askedAt));
   });
 }
 

@@ -1,4 +1,5 @@
 import Papa from 'papaparse';
+import { largest } from '../estimation/numerics/extent';
 
 /** One physical record of a CSV file with the file line it starts on (line 1 is the first). */
 export interface CsvRow {
@@ -18,7 +19,7 @@ const separators = [',', ';', '\t'] as const;
 function separatorOf(text: string): string {
   const firstLine = text.split(/\r?\n/, 1)[0];
   const counts = separators.map((s) => firstLine.split(s).length - 1);
-  const best = counts.indexOf(Math.max(...counts));
+  const best = counts.indexOf(largest(counts));
   return counts[best] > 0 ? separators[best] : ',';
 }
 

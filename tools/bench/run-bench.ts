@@ -4,12 +4,20 @@ import { stateDir } from '../stack/state-dir';
 import type { BenchContext, BenchPart } from './bench-part';
 import { fitBench } from './fit-bench';
 import { memoryFitBench } from './memory-fit-bench';
+import { statedFitBench } from './stated-fit-bench';
 import { syncBench } from './sync-bench';
 import { syncLoadBench } from './sync-load-bench';
 import { datasetBench } from './dataset-bench';
 
 /** The parts `npm run bench` runs, in order; `npm run bench -- NAME…` runs only those. */
-const parts: readonly BenchPart[] = [fitBench, memoryFitBench, syncBench, syncLoadBench, datasetBench];
+const parts: readonly BenchPart[] = [
+  fitBench,
+  memoryFitBench,
+  syncBench,
+  syncLoadBench,
+  datasetBench,
+  statedFitBench,
+];
 
 const log = (line: string) => console.log(`[fieldcurve] ${line}`);
 

@@ -9,7 +9,7 @@ import {
 import { enforceMonotone } from '@shared/estimation/price-ladder/monotone-answers';
 import { analysePriceLadder } from '@shared/estimation/price-ladder/price-ladder';
 import type { AnalysisDataset } from '../analysis-dataset';
-import { weightOf, type RespondentWeights } from '../respondent-weights';
+import { rowWeight, type RespondentWeights } from '../respondent-weights';
 import { coefficientFrom, figure, type MethodFit } from './method-fit';
 import { regressionTermLabel } from './coefficient-labels';
 
@@ -37,7 +37,8 @@ export function fitLadder(
       respondent: row.interviewId,
       price: s.price,
       buy: s.buy,
-      weight: weightOf(weights, row.interviewId),
+      weight: rowWeight(weights, row),
+      ...(row.count === undefined ? {} : { count: row.count }),
     })),
   );
   const result = analysePriceLadder({
@@ -121,7 +122,10 @@ export function fitLadder(
       n: result.n,
     },
     noCurveReason: null,
-    evidence: dataset.rows.map((row) => ({ points: row.steps.map((s) => s.price) })),
+    evidence: dataset.rows.map((row) => ({
+      points: row.steps.map((s) => s.price),
+      count: row.count,
+    })),
     warnings: result.warnings,
     assumptions: result.assumptions,
   };
@@ -133,12 +137,14 @@ function refitLogit(answers: readonly LadderAnswer[], scale: 'yes-no' | 'intent-
   const respondents = answers.map((a) => a.respondent);
   const prices = answers.map((a) => a.price);
   const monotone = enforceMonotone(respondents, prices, raw, 'carry-no-upward');
+  const tabulated = answers.some((a) => a.count !== undefined);
   return fitBinomialLogit(
     {
       x: prices,
       y: monotone.probabilities,
       weights: answers.map((a) => a.weight ?? 1),
       clusters: respondents,
+      clusterSizes: tabulated ? answers.map((a) => a.count ?? 1) : undefined,
     },
     'price',
   );

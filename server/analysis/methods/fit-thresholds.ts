@@ -10,12 +10,13 @@ import {
 } from '@shared/analysis/resampled-curves';
 import { piecewiseShare } from '@shared/analysis/tabulated-share-curves';
 import {
+  DEFAULT_RESAMPLES,
   percentileIntervals,
-  respondentResamples,
 } from '@shared/estimation/resampling/respondent-bootstrap';
 import type { ThresholdAnswer } from '@shared/estimation/price-thresholds/threshold-answers';
 import type { AnalysisDataset } from '../analysis-dataset';
-import { weightOf, type RespondentWeights } from '../respondent-weights';
+import { rowWeight, type RespondentWeights } from '../respondent-weights';
+import { resampleRespondents } from './resample-respondents';
 import { rangeOf, type MethodFit } from './method-fit';
 
 /**
@@ -32,9 +33,10 @@ export function fitThresholds(
     cheap: r.cheap,
     expensive: r.expensive,
     tooExpensive: r.tooExpensive,
-    weight: weightOf(weights, r.interviewId),
+    weight: rowWeight(weights, r),
     likelihoodCheap: r.likelihoodCheap ?? undefined,
     likelihoodExpensive: r.likelihoodExpensive ?? undefined,
+    ...(r.count === undefined ? {} : { count: r.count }),
   }));
   const withTrial =
     dataset.rows.length > 0 &&
@@ -44,7 +46,7 @@ export function fitThresholds(
   const result = analyse(answers);
   // The price points are crossings of empirical curves and the trial curve is an average of
   // answers: their intervals and band come from resampling respondents and analysing again.
-  const resamples = respondentResamples(answers, analyse);
+  const resamples = resampleRespondents(answers, analyse, DEFAULT_RESAMPLES);
   const intervals = percentileIntervals(
     resamples.map((r) => r && pricePoints(r)),
     pricePointKeys,
@@ -101,7 +103,10 @@ export function fitThresholds(
     noCurveReason: trial
       ? null
       : 'price thresholds give a demand curve only with the purchase-likelihood follow-ups, and not every respondent answered them',
-    evidence: kept.map((r) => ({ range: { low: r.tooCheap, high: r.tooExpensive } })),
+    evidence: kept.map((r) => ({
+      range: { low: r.tooCheap, high: r.tooExpensive },
+      count: r.count,
+    })),
     warnings: result.warnings,
     assumptions: [
       ...result.assumptions,

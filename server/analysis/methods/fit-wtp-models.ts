@@ -11,7 +11,8 @@ import {
   normalDistribution,
 } from '@shared/estimation/maximum-likelihood/latent-distribution';
 import type { AnalysisDataset } from '../analysis-dataset';
-import { weightOf, type RespondentWeights } from '../respondent-weights';
+import { respondentsOf } from '../analysis-dataset';
+import { rowWeight, type RespondentWeights } from '../respondent-weights';
 import { coefficientFrom, figure, type MethodFit } from './method-fit';
 import { wtpTermLabels } from './coefficient-labels';
 
@@ -24,9 +25,12 @@ export function fitPaymentCard(
   const intervals = dataset.rows.map((r) => ({
     lower: r.lower,
     upper: r.upper ?? Infinity,
-    weight: weightOf(weights, r.interviewId),
+    weight: rowWeight(weights, r),
   }));
-  const result = analysePaymentCard(intervals, spec.distribution, spec.confidenceLevel);
+  const result = withRespondents(
+    analysePaymentCard(intervals, spec.distribution, spec.confidenceLevel),
+    dataset.rows,
+  );
   const dist = spec.distribution === 'normal' ? normalDistribution : logisticDistribution;
   const { covariance } = fitIntervalCensored(intervals, dist, 'lower');
   return wtpModelFit(result, covariance, {
@@ -34,6 +38,7 @@ export function fitPaymentCard(
     method: 'payment card',
     evidence: dataset.rows.map((r) => ({
       points: r.upper === null ? [r.lower] : [r.lower, r.upper],
+      count: r.count,
     })),
   });
 }
@@ -50,15 +55,33 @@ export function fitDichotomousChoice(
     yes: r.yes,
     bid2: r.bid2 ?? undefined,
     yes2: r.yes2 ?? undefined,
-    weight: weightOf(weights, r.interviewId),
+    weight: rowWeight(weights, r),
   }));
-  const result = analyseDichotomousChoice(answers, format, spec.confidenceLevel);
+  const result = withRespondents(
+    analyseDichotomousChoice(answers, format, spec.confidenceLevel),
+    dataset.rows,
+  );
   const { covariance } = fitIntervalCensored(answers.map(bidInterval), logisticDistribution, 'bid');
   return wtpModelFit(result, covariance, {
     distribution: 'logistic',
     method: `${format} dichotomous choice`,
-    evidence: dataset.rows.map((r) => ({ points: r.bid2 === null ? [r.bid] : [r.bid, r.bid2] })),
+    evidence: dataset.rows.map((r) => ({
+      points: r.bid2 === null ? [r.bid] : [r.bid, r.bid2],
+      count: r.count,
+    })),
   });
+}
+
+/**
+ * The respondents behind the rows: the estimator counts rows, and a frequency table's row
+ * stands for a cell of respondents (its weight already carries them into the likelihood).
+ */
+function withRespondents<R extends { n: number; curve: { n: number } }>(
+  result: R,
+  rows: readonly { count?: number }[],
+): R {
+  const n = rows.reduce((s, r) => s + respondentsOf(r), 0);
+  return { ...result, n, curve: { ...result.curve, n } };
 }
 
 type WtpModelResult = WtpModelSummary & {

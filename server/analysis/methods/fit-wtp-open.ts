@@ -4,10 +4,12 @@ import {
   resampledBandNote,
   resampledCurveCount,
 } from '@shared/analysis/resampled-curves';
-import { respondentResamples } from '@shared/estimation/resampling/respondent-bootstrap';
+
 import { analyseOpenEndedWtp } from '@shared/estimation/willingness-to-pay/open-ended-wtp';
 import type { AnalysisDataset } from '../analysis-dataset';
-import { weightOf, type RespondentWeights } from '../respondent-weights';
+import { respondentsOf } from '../analysis-dataset';
+import { rowWeight, type RespondentWeights } from '../respondent-weights';
+import { resampleRespondents } from './resample-respondents';
 import { figure, type MethodFit } from './method-fit';
 
 /** Open WTP: the empirical demand curve and mean and median WTP with a seeded bootstrap. */
@@ -17,15 +19,17 @@ export function fitWtpOpen(
   weights: RespondentWeights | null,
 ): MethodFit {
   const wtp = dataset.rows.map((r) => r.amount);
+  const tabulated = dataset.rows.some((r) => r.count !== undefined);
   const result = analyseOpenEndedWtp({
     wtp,
-    weights: dataset.rows.map((r) => weightOf(weights, r.interviewId)),
+    weights: dataset.rows.map((r) => rowWeight(weights, r)),
+    counts: tabulated ? dataset.rows.map(respondentsOf) : undefined,
     confidenceLevel: spec.confidenceLevel,
     replicates: spec.bootstrap.replicates,
     seed: spec.bootstrap.seed,
   });
   const resampledShares = resampledStepShares(
-    dataset.rows.map((r) => ({ amount: r.amount, weight: weightOf(weights, r.interviewId) })),
+    dataset.rows.map((r) => ({ amount: r.amount, weight: rowWeight(weights, r), count: r.count })),
     result.demandCurve.map((p) => p.price),
   );
   return {
@@ -55,7 +59,7 @@ export function fitWtpOpen(
       n: result.n,
     },
     noCurveReason: null,
-    evidence: dataset.rows.map((r) => ({ points: [r.amount] })),
+    evidence: dataset.rows.map((r) => ({ points: [r.amount], count: r.count })),
     warnings: [],
     assumptions: [
       ...result.assumptions,
@@ -67,6 +71,7 @@ export function fitWtpOpen(
 interface StatedAmount {
   amount: number;
   weight: number;
+  count?: number;
 }
 
 /**
@@ -79,7 +84,7 @@ function resampledStepShares(
 ): number[][] | undefined {
   const count = resampledCurveCount(amounts.length);
   if (count === 0) return undefined;
-  const resamples = respondentResamples(stated, (s) => sharesAtOrAbove(s, amounts), count);
+  const resamples = resampleRespondents(stated, (s) => sharesAtOrAbove(s, amounts), count);
   return resamples.every((r) => r !== null) ? resamples : undefined;
 }
 

@@ -2,6 +2,7 @@ import type { RespondentEvidence } from '@shared/analysis/cell-support';
 import type { CurveDescription } from '@shared/analysis/curve-description';
 import type { FitCoefficient, FitResult, KeyFigure } from '@shared/analysis/fit-result';
 import type { IntervalEstimate } from '@shared/estimation/maximum-likelihood/delta-method';
+import { extent } from '@shared/estimation/numerics/extent';
 
 /** What one method's estimator gives the fit result, before the schedule is tabulated. */
 export interface MethodFit {
@@ -47,5 +48,5 @@ export function coefficientFrom(term: string, value: IntervalEstimate): FitCoeff
 
 /** The smallest and largest of some prices. */
 export function rangeOf(prices: readonly number[]): { min: number; max: number } {
-  return { min: Math.min(...prices), max: Math.max(...prices) };
+  return extent(prices);
 }

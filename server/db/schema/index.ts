@@ -18,3 +18,4 @@ export * from './field-devices';
 export * from './rate-limits';
 export * from './datasets';
 export * from './shelf-observation-rows';
+export * from './stated-answer-rows';

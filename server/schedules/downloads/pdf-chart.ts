@@ -1,6 +1,7 @@
 import type PDFDocument from 'pdfkit';
 import type { ScheduleVersion } from '@shared/analysis/schedule-version';
 import { reportNumber } from './report-number';
+import { largest } from '@shared/estimation/numerics/extent';
 
 type Doc = InstanceType<typeof PDFDocument>;
 
@@ -29,7 +30,7 @@ export function niceTicks(low: number, high: number, count = 5): number[] {
 export function drawScheduleChart(doc: Doc, version: ScheduleVersion, box: ChartBox): void {
   const rows = version.rows;
   const xTicks = niceTicks(rows[0].price, rows[rows.length - 1].price);
-  const top = Math.max(...rows.map((r) => Math.max(r.ciHigh ?? r.quantity, r.quantity)));
+  const top = largest(rows.map((r) => Math.max(r.ciHigh ?? r.quantity, r.quantity)));
   const yTicks = niceTicks(0, top > 0 ? top : 1);
   const xMin = Math.min(rows[0].price, xTicks[0]);
   const xMax = Math.max(rows[rows.length - 1].price, xTicks[xTicks.length - 1]);

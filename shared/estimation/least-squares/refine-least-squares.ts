@@ -1,5 +1,6 @@
 import { CompensatedSum } from './compensated-dot';
 import { HouseholderQr } from './householder-qr';
+import { largest } from '../numerics/extent';
 
 /** A least-squares solution z with its residual r = b − A·z, after refinement. */
 export interface RefinedSolution {
@@ -32,7 +33,7 @@ export function refineLeastSquares(
   while (steps < MAX_STEPS) {
     const size = correctOnce(columns, qr, b, solution, residuals);
     steps++;
-    const scale = Math.max(...solution.map(Math.abs), Number.MIN_VALUE);
+    const scale = Math.max(largest(solution.map(Math.abs)), Number.MIN_VALUE);
     // Stop once corrections are at rounding level, or stop shrinking (no further gain possible).
     if (size <= 2 ** -52 * scale || size >= previous / 2) break;
     previous = size;

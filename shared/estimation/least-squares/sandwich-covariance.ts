@@ -1,3 +1,4 @@
+import { largest } from '../numerics/extent';
 import { CompensatedSum } from './compensated-dot';
 
 /**
@@ -49,7 +50,7 @@ function groupScores(
   residuals: Float64Array,
   groups: readonly number[],
 ): number[][] {
-  const count = Math.max(...groups) + 1;
+  const count = largest(groups) + 1;
   const sums = Array.from({ length: count }, () => q.map(() => new CompensatedSum()));
   residuals.forEach((e, i) => {
     const sum = sums[groups[i]];

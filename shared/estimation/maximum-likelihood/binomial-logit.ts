@@ -12,6 +12,12 @@ export interface BinomialLogitData {
   readonly weights?: readonly number[];
   /** Cluster labels (e.g. respondent) for the cluster-robust covariance; none: one per row. */
   readonly clusters?: readonly (string | number)[];
+  /**
+   * Respondents each cluster stands for (per row, the same on every row of a cluster; default
+   * 1): a cluster of m identical respondents whose rows carry m times one respondent's weight.
+   * Its score is m·s, and the m respondents add m·s·sᵀ = (m·s)(m·s)ᵀ/m to the meat.
+   */
+  readonly clusterSizes?: readonly number[];
 }
 
 export interface BinomialLogitFit {
@@ -118,7 +124,7 @@ function clusterSandwich(
   const m = moment.value() / information.value();
   const c = data.x.map((xi) => xi - m);
   const h = [new CompensatedSum(), new CompensatedSum(), new CompensatedSum()];
-  const scores = new Map<string | number, [CompensatedSum, CompensatedSum]>();
+  const scores = new Map<string | number, [CompensatedSum, CompensatedSum, number]>();
   p.forEach((pi, i) => {
     const v = w[i] * pi * (1 - pi);
     h[0].add(v);
@@ -127,19 +133,23 @@ function clusterSandwich(
     const key = data.clusters?.[i] ?? i;
     const r = w[i] * (data.y[i] - pi);
     let score = scores.get(key);
-    if (!score) scores.set(key, (score = [new CompensatedSum(), new CompensatedSum()]));
+    if (!score) {
+      score = [new CompensatedSum(), new CompensatedSum(), data.clusterSizes?.[i] ?? 1];
+      scores.set(key, score);
+    }
     score[0].add(r);
     score[1].addProduct(r, c[i]);
   });
-  const g = scores.size;
+  let g = 0;
+  for (const [, , size] of scores.values()) g += size;
   if (g < 2)
     throw new EstimationError('too-few-observations', 'need at least two clusters', 'respondent');
   const meat = [new CompensatedSum(), new CompensatedSum(), new CompensatedSum()];
-  for (const [s0, s1] of scores.values()) {
+  for (const [s0, s1, size] of scores.values()) {
     const [t0, t1] = [s0.value(), s1.value()];
-    meat[0].addProduct(t0, t0);
-    meat[1].addProduct(t0, t1);
-    meat[2].addProduct(t1, t1);
+    meat[0].addProduct(t0, t0 / size);
+    meat[1].addProduct(t0, t1 / size);
+    meat[2].addProduct(t1, t1 / size);
   }
   const [h00, h01, h11] = h.map((sum) => sum.value());
   const det = h00 * h11 - h01 * h01;

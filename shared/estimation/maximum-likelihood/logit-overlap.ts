@@ -1,4 +1,5 @@
 import { EstimationError } from '../estimation-error';
+import { largest, smallest } from '../numerics/extent';
 
 /**
  * The logit maximum-likelihood estimate with one regressor exists only when the "yes" and "no"
@@ -22,7 +23,7 @@ export function assertLogitOverlap(
       field,
     );
   }
-  const separated = Math.max(...yesX) <= Math.min(...noX) || Math.min(...yesX) >= Math.max(...noX);
+  const separated = largest(yesX) <= smallest(noX) || smallest(yesX) >= largest(noX);
   if (separated) {
     throw new EstimationError(
       'no-finite-estimate',

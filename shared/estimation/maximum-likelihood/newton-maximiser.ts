@@ -1,5 +1,6 @@
 import { EstimationError } from '../estimation-error';
 import { invertPositiveDefinite, multiplyMatrixVector } from './small-matrix';
+import { largest } from '../numerics/extent';
 
 /** A log-likelihood with its gradient and Hessian at one parameter vector. */
 export interface LogLikelihoodPoint {
@@ -88,7 +89,7 @@ function newtonStep(point: LogLikelihoodPoint): {
       step: multiplyMatrixVector(exact, point.gradient),
       inverse: { matrix: exact, exact: true },
     };
-  const scale = Math.max(...negH.map((row, i) => Math.abs(row[i])), 1e-12);
+  const scale = Math.max(largest(negH.map((row, i) => Math.abs(row[i]))), 1e-12);
   for (let ridge = 1e-8 * scale; ridge < 1e12 * scale; ridge *= 10) {
     const damped = invertPositiveDefinite(
       negH.map((row, i) => row.map((v, j) => (i === j ? v + ridge : v))),

@@ -1,5 +1,6 @@
 import { EstimationError } from '../estimation-error';
 import { HouseholderQr } from '../least-squares/householder-qr';
+import { largest } from '../numerics/extent';
 
 /** Result of a small dense least-squares solve by Householder QR. */
 export interface HouseholderSolution {
@@ -25,7 +26,7 @@ export function householderLeastSquares(
     throw new EstimationError('too-few-observations', `need at least ${p} rows, got ${rows}`);
   }
   const columns = Array.from({ length: p }, (_, j) => Float64Array.from(a, (row) => row[j]));
-  const scale = Math.max(...columns.map((c) => Math.sqrt(c.reduce((s, v) => s + v * v, 0))));
+  const scale = largest(columns.map((c) => Math.sqrt(c.reduce((s, v) => s + v * v, 0))));
   const qr = new HouseholderQr(columns);
   for (let j = 0; j < p; j++) {
     if (!(Math.abs(qr.rEntry(j, j)) > scale * 1e-14 * rows)) {

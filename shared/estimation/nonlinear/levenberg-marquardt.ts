@@ -1,4 +1,5 @@
 import { householderLeastSquares } from './householder-least-squares';
+import { largest } from '../numerics/extent';
 
 /** What the iteration needs from a least-squares problem: predictions and their Jacobian. */
 export interface LeastSquaresProblem {
@@ -115,8 +116,8 @@ function columnNorms(jac: readonly number[][]): number[] {
 
 function maxGradientCosine(jac: readonly number[][], residuals: readonly number[]): number {
   const rNorm = euclideanNorm(residuals);
-  return Math.max(
-    ...columnNorms(jac).map((norm, j) => {
+  return largest(
+    columnNorms(jac).map((norm, j) => {
       const dot = jac.reduce((s, row, i) => s + row[j] * residuals[i], 0);
       return norm === 0 ? 0 : Math.abs(dot) / (norm * rNorm);
     }),

@@ -1,3 +1,4 @@
+import { frequencyBootstrap } from '../resampling/frequency-resamples';
 import { respondentBootstrap, type ResampledInterval } from '../resampling/respondent-bootstrap';
 
 /** The ladder's answers after the monotone rule, one entry per answer. */
@@ -6,6 +7,8 @@ export interface LadderSample {
   readonly prices: readonly number[];
   readonly probabilities: readonly number[];
   readonly weights: readonly number[];
+  /** Respondents each answer's respondent stands for (a frequency table's cells); default 1. */
+  readonly counts?: readonly number[];
 }
 
 /** The central range of the ladder prices that resampled surveys chose. */
@@ -45,7 +48,7 @@ export function gridMaximumInterval(
     }
     return { price: best };
   };
-  const { price } = respondentBootstrap(people, ['price'], bestPrice, level, resamples, seed);
+  const { price } = resampledFigures(people, ['price'], bestPrice, level, resamples, seed);
   return { ...price, resamples };
 }
 
@@ -53,6 +56,48 @@ export function gridMaximumInterval(
 export interface RespondentLadderTotals {
   readonly weight: Float64Array;
   readonly bought: Float64Array;
+  /** Respondents these totals stand for (a frequency table's cell), each with 1/count of them. */
+  readonly count: number;
+}
+
+/**
+ * The respondent bootstrap of ladder figures: respondents drawn one by one, or, when the
+ * sample is a frequency table, each cell's draw count from a seeded multinomial draw (the same
+ * distribution, at a cost that grows with the cells).
+ */
+export function resampledFigures<K extends string>(
+  people: readonly RespondentLadderTotals[],
+  keys: readonly K[],
+  compute: (drawn: readonly RespondentLadderTotals[]) => Partial<Record<K, number | null>>,
+  level: number,
+  resamples: number,
+  seed: number,
+): Record<K, ResampledInterval> {
+  if (people.every((person) => person.count === 1)) {
+    return respondentBootstrap(people, keys, compute, level, resamples, seed);
+  }
+  const counts = people.map((person) => person.count);
+  return frequencyBootstrap(
+    counts,
+    keys,
+    (drawn) => {
+      const sample: RespondentLadderTotals[] = [];
+      drawn.forEach((times, k) => {
+        if (times === 0) return;
+        const person = people[k];
+        const share = times / person.count;
+        sample.push({
+          weight: person.weight.map((w) => w * share),
+          bought: person.bought.map((b) => b * share),
+          count: times,
+        });
+      });
+      return compute(sample);
+    },
+    level,
+    resamples,
+    seed,
+  );
 }
 
 /**
@@ -69,7 +114,11 @@ export function ladderTotalsByRespondent(sample: LadderSample): {
   sample.respondents.forEach((respondent, i) => {
     let own = byRespondent.get(respondent);
     if (!own) {
-      own = { weight: new Float64Array(levels.length), bought: new Float64Array(levels.length) };
+      own = {
+        weight: new Float64Array(levels.length),
+        bought: new Float64Array(levels.length),
+        count: sample.counts?.[i] ?? 1,
+      };
       byRespondent.set(respondent, own);
     }
     const j = column.get(sample.prices[i])!;

@@ -8,6 +8,11 @@ export interface LadderAnswer {
   readonly buy: number;
   /** Survey weight of the respondent; default 1. */
   readonly weight?: number;
+  /**
+   * Respondents who answered exactly as this one did, all their prices alike (default 1): a
+   * frequency table's cell, whose `weight` is then count × one respondent's weight.
+   */
+  readonly count?: number;
 }
 
 /** 'yes-no' answers 0/1; 'intent-5' answers 1 (certainly not) … 5 (certainly would buy). */

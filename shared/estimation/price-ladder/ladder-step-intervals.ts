@@ -1,8 +1,9 @@
 import { arcElasticity } from '../welfare/arc-elasticity';
-import { respondentBootstrap, type ResampledInterval } from '../resampling/respondent-bootstrap';
+import type { ResampledInterval } from '../resampling/respondent-bootstrap';
 import {
   GRID_MAXIMUM_RESAMPLES,
   ladderTotalsByRespondent,
+  resampledFigures,
   sumTotals,
   type LadderSample,
 } from './grid-maximum-interval';
@@ -46,7 +47,7 @@ export function ladderStepIntervals(
     });
     return result;
   };
-  const intervals = respondentBootstrap(
+  const intervals = resampledFigures(
     people,
     [...shareKeys, ...arcKeys],
     figures,

@@ -27,6 +27,8 @@ export function summariseSteps(
   probabilities: readonly number[],
   weights: readonly number[],
   unitCost?: number,
+  /** Respondents each answer stands for (default 1). */
+  counts?: readonly number[],
 ): LadderStep[] {
   const levels = [...new Set(prices)].sort((a, b) => a - b);
   if (levels.length < 2) {
@@ -42,7 +44,7 @@ export function summariseSteps(
     let weighted = 0;
     prices.forEach((p, i) => {
       if (p !== price) return;
-      count++;
+      count += counts?.[i] ?? 1;
       weightSum += weights[i];
       weighted += weights[i] * probabilities[i];
     });

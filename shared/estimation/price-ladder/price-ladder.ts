@@ -77,11 +77,20 @@ export function analysePriceLadder(spec: PriceLadderSpec): PriceLadderResult {
   const respondents = answers.map((a) => a.respondent);
   const prices = answers.map((a) => a.price);
   const weights = answers.map((a) => a.weight ?? 1);
-  const monotone = enforceMonotone(respondents, prices, raw, rule);
-  const steps = summariseSteps(prices, monotone.probabilities, weights, unitCost);
-  const data = { x: prices, y: monotone.probabilities, weights, clusters: respondents };
+  // A frequency table's cell stands for `count` respondents who answered alike.
+  const tabulated = answers.some((a) => a.count !== undefined);
+  const counts = tabulated ? answers.map((a) => a.count ?? 1) : undefined;
+  const monotone = enforceMonotone(respondents, prices, raw, rule, counts);
+  const steps = summariseSteps(prices, monotone.probabilities, weights, unitCost, counts);
+  const data = {
+    x: prices,
+    y: monotone.probabilities,
+    weights,
+    clusters: respondents,
+    clusterSizes: counts,
+  };
   const fit = fitBinomialLogit(data, 'price');
-  const n = new Set(respondents).size;
+  const n = fit.clusterCount;
   const logistic = summariseLogisticCurve(
     fit,
     fit.robustCovariance,
@@ -90,11 +99,11 @@ export function analysePriceLadder(spec: PriceLadderSpec): PriceLadderResult {
   );
   const observed = { min: steps[0].price, max: steps[steps.length - 1].price };
   const level = spec.confidenceLevel ?? 0.95;
-  const sample = { respondents, prices, probabilities: monotone.probabilities, weights };
+  const sample = { respondents, prices, probabilities: monotone.probabilities, weights, counts };
   return {
     n,
-    answers: answers.length,
-    nonMonotoneRespondents: monotone.nonMonotoneRespondents.length,
+    answers: counts ? counts.reduce((sum, c) => sum + c, 0) : answers.length,
+    nonMonotoneRespondents: monotone.nonMonotoneCount,
     changedAnswers: monotone.changedAnswers,
     steps,
     revenueMaxPrice: priceOfMaximum(steps, (s) => s.revenueIndex),

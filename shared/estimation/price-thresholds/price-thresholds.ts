@@ -69,7 +69,7 @@ export function analysePriceThresholds(spec: PriceThresholdSpec): PriceThreshold
     .map(([name]) => `${name}: the curves do not cross on the stated prices`);
   const { marginalCheapnessPrice: low, marginalExpensivenessPrice: high } = points;
   return {
-    n: kept.length,
+    n: kept.reduce((s, a) => s + (a.count ?? 1), 0),
     outOfOrderRespondents: outOfOrder,
     curves: c,
     ...points,

@@ -15,6 +15,11 @@ export interface ThresholdAnswer {
   readonly likelihoodCheap?: number;
   /** Purchase likelihood (1–5) at the expensive price. */
   readonly likelihoodExpensive?: number;
+  /**
+   * Respondents who gave exactly these answers (default 1); a frequency table's cell carries
+   * `count` and, in `weight`, count × one respondent's weight.
+   */
+  readonly count?: number;
 }
 
 /** 'exclude' (default) drops respondents whose thresholds are not too cheap ≤ cheap ≤ expensive ≤ too expensive. */
@@ -62,5 +67,8 @@ export function screenThresholdAnswers(
       'tooCheap',
     );
   }
-  return { kept, outOfOrder: answers.filter((a) => !ordered(a)).length };
+  return {
+    kept,
+    outOfOrder: answers.filter((a) => !ordered(a)).reduce((s, a) => s + (a.count ?? 1), 0),
+  };
 }

@@ -1,6 +1,7 @@
 import { EstimationError } from '../estimation-error';
 import type { TieRule } from './curve-crossing';
 import type { ThresholdAnswer } from './threshold-answers';
+import { largest } from '../numerics/extent';
 
 /** Purchase probability for each stated likelihood 1–5. */
 export type LikelihoodCalibration = Readonly<Record<1 | 2 | 3 | 4 | 5, number>>;
@@ -97,7 +98,7 @@ function evaluate(knots: Knots, p: number): number {
 }
 
 function maximumTrial(prices: number[], trial: number[], tieRule: TieRule): TrialCurve['maxTrial'] {
-  const value = Math.max(...trial);
+  const value = largest(trial);
   const from = trial.findIndex((t) => Math.abs(t - value) <= 1e-12);
   let to = from;
   while (to + 1 < trial.length && Math.abs(trial[to + 1] - value) <= 1e-12) to++;

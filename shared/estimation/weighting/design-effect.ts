@@ -12,16 +12,21 @@ export interface DesignEffect {
 }
 
 /** Kish (1992) design effect of unequal weights and the effective sample size. */
-export function kishDesignEffect(weights: readonly number[]): DesignEffect {
+export function kishDesignEffect(
+  weights: readonly number[],
+  /** Respondents each weight belongs to (default 1 each). */
+  counts?: readonly number[],
+): DesignEffect {
   if (weights.length === 0)
     throw new EstimationError('too-few-observations', 'there are no weights', 'weight');
   weights.forEach((w, i) => {
     if (!(Number.isFinite(w) && w > 0))
       throw new EstimationError('invalid-value', `weight ${i + 1} must be a number > 0`, 'weight');
   });
-  const n = weights.length;
-  const sum = weights.reduce((s, w) => s + w, 0);
-  const sumSquares = weights.reduce((s, w) => s + w * w, 0);
+  const count = (i: number) => counts?.[i] ?? 1;
+  const n = counts ? counts.reduce((s, c) => s + c, 0) : weights.length;
+  const sum = weights.reduce((s, w, i) => s + w * count(i), 0);
+  const sumSquares = weights.reduce((s, w, i) => s + w * w * count(i), 0);
   const designEffect = (n * sumSquares) / (sum * sum);
   return {
     n,

@@ -7,6 +7,11 @@ export interface RakingSpec {
   /** Per variable, the population share (or total) of each level. */
   readonly targets: Readonly<Record<string, Readonly<Record<string, number>>>>;
   readonly baseWeights?: readonly number[];
+  /**
+   * Respondents each entry stands for (default 1): raking a cross-tabulation of the levels, one
+   * entry per cell, gives every respondent of a cell the cell's weight.
+   */
+  readonly counts?: readonly number[];
   /** Default 100 sweeps. */
   readonly maxIterations?: number;
   /** Largest allowed |weighted share − target share| over all margins; default 1e-12. */
@@ -57,14 +62,18 @@ export function rake(spec: RakingSpec): RakingResult {
       'weight',
     );
   }
+  const counts = spec.counts ?? new Array<number>(n).fill(1);
+  if (counts.length !== n || counts.some((c) => !(Number.isInteger(c) && c > 0))) {
+    throw new EstimationError('invalid-value', 'counts must be one whole number > 0 per entry', 'count');
+  }
   const maxIterations = spec.maxIterations ?? 100;
   const tolerance = spec.tolerance ?? 1e-12;
-  let error = marginError(margins, weights);
+  let error = marginError(margins, weights, counts);
   let iterations = 0;
   while (error > tolerance && iterations < maxIterations) {
-    for (const margin of margins) scaleToMargin(margin, weights);
+    for (const margin of margins) scaleToMargin(margin, weights, counts);
     iterations++;
-    error = marginError(margins, weights);
+    error = marginError(margins, weights, counts);
   }
   if (error > tolerance) {
     throw new EstimationError(
@@ -73,10 +82,11 @@ export function rake(spec: RakingSpec): RakingResult {
       'targets',
     );
   }
-  const total = weights.reduce((s, w) => s + w, 0);
+  const total = weights.reduce((s, w, i) => s + w * counts[i], 0);
+  const respondents = counts.reduce((s, c) => s + c, 0);
   return {
-    n,
-    weights: weights.map((w) => (w * n) / total),
+    n: respondents,
+    weights: weights.map((w) => (w * respondents) / total),
     iterations,
     maxMarginError: error,
     assumptions: ['population margins known exactly', 'weights scaled to sum to the sample size'],
@@ -88,24 +98,34 @@ interface Margin {
   readonly targets: Map<string, number>;
 }
 
-function weightedShares({ levels }: Margin, weights: readonly number[]): Map<string, number> {
-  const total = weights.reduce((s, w) => s + w, 0);
+function weightedShares(
+  { levels }: Margin,
+  weights: readonly number[],
+  counts: readonly number[],
+): Map<string, number> {
+  const total = weights.reduce((s, w, i) => s + w * counts[i], 0);
   const shares = new Map<string, number>();
-  levels.forEach((level, i) => shares.set(level, (shares.get(level) ?? 0) + weights[i] / total));
+  levels.forEach((level, i) =>
+    shares.set(level, (shares.get(level) ?? 0) + (weights[i] * counts[i]) / total),
+  );
   return shares;
 }
 
-function scaleToMargin(margin: Margin, weights: number[]): void {
-  const shares = weightedShares(margin, weights);
+function scaleToMargin(margin: Margin, weights: number[], counts: readonly number[]): void {
+  const shares = weightedShares(margin, weights, counts);
   margin.levels.forEach(
     (level, i) => (weights[i] *= (margin.targets.get(level) ?? 0) / (shares.get(level) ?? 1)),
   );
 }
 
-function marginError(margins: readonly Margin[], weights: readonly number[]): number {
+function marginError(
+  margins: readonly Margin[],
+  weights: readonly number[],
+  counts: readonly number[],
+): number {
   let worst = 0;
   for (const margin of margins) {
-    const shares = weightedShares(margin, weights);
+    const shares = weightedShares(margin, weights, counts);
     for (const [level, target] of margin.targets)
       worst = Math.max(worst, Math.abs((shares.get(level) ?? 0) - target));
   }

@@ -1,4 +1,5 @@
 import { mulberry32 } from '../random/mulberry32';
+import { frequencyResamples } from '../resampling/frequency-resamples';
 import { sortedQuantile } from '../resampling/sorted-quantile';
 
 export interface BootstrapOptions {
@@ -43,6 +44,51 @@ export function percentileBootstrap(
     }
     draws.push(statistic(v, w));
   }
+  return summarise(draws, confidenceLevel, replicates, seed);
+}
+
+/**
+ * The same bootstrap on a frequency table — distinct values, the total weight of each and the
+ * respondents behind it — with each resample a seeded multinomial draw of how many respondents
+ * each value gives (see frequencyResamples): the distribution of drawing respondents one by
+ * one, at a cost that grows with the distinct values, not the respondents.
+ */
+export function frequencyPercentileBootstrap(
+  values: readonly number[],
+  weights: readonly number[],
+  counts: readonly number[],
+  statistic: (values: number[], weights: number[]) => number,
+  confidenceLevel: number,
+  options: BootstrapOptions = {},
+): BootstrapInterval {
+  const replicates = options.replicates ?? 2000;
+  const seed = options.seed ?? 20240917;
+  const order = values.map((_, i) => i).sort((i, j) => values[i] - values[j]);
+  const draws = frequencyResamples(
+    order.map((i) => counts[i]),
+    (drawn) => {
+      const v: number[] = [];
+      const w: number[] = [];
+      drawn.forEach((times, k) => {
+        if (times === 0) return;
+        const i = order[k];
+        v.push(values[i]);
+        w.push((weights[i] * times) / counts[i]);
+      });
+      return statistic(v, w);
+    },
+    replicates,
+    seed,
+  ).map((draw) => draw ?? NaN);
+  return summarise(draws, confidenceLevel, replicates, seed);
+}
+
+function summarise(
+  draws: number[],
+  confidenceLevel: number,
+  replicates: number,
+  seed: number,
+): BootstrapInterval {
   draws.sort((a, b) => a - b);
   const mean = draws.reduce((s, d) => s + d, 0) / replicates;
   const stdError = Math.sqrt(draws.reduce((s, d) => s + (d - mean) ** 2, 0) / (replicates - 1));

@@ -4,6 +4,7 @@ import { fitIntervalCensored, type WtpInterval } from '../maximum-likelihood/int
 import { logisticDistribution } from '../maximum-likelihood/latent-distribution';
 import { assertLogitOverlap } from '../maximum-likelihood/logit-overlap';
 import { summariseWtpModel, wtpModelCurve, type WtpModelSummary } from './wtp-model-summary';
+import { largest, smallest } from '../numerics/extent';
 
 /** One dichotomous-choice answer: yes/no at a bid, and for double-bounded data a follow-up. */
 export interface BidAnswer {
@@ -59,8 +60,8 @@ export function analyseDichotomousChoice(
       logisticDistribution,
       `${format} dichotomous choice`,
       {
-        min: Math.min(...allBids),
-        max: Math.max(...allBids),
+        min: smallest(allBids),
+        max: largest(allBids),
       },
       answers.length,
     ),

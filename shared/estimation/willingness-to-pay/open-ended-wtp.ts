@@ -1,12 +1,23 @@
 import type { FittedDemandCurve } from '../demand-schedule/fitted-demand-curve';
 import { EstimationError } from '../estimation-error';
-import { percentileBootstrap, type BootstrapInterval, type BootstrapOptions } from './bootstrap';
+import {
+  frequencyPercentileBootstrap,
+  percentileBootstrap,
+  type BootstrapInterval,
+  type BootstrapOptions,
+} from './bootstrap';
 import { weightedMean, weightedMedian } from './weighted-quantiles';
+import { largest, smallest } from '../numerics/extent';
 
 export interface OpenEndedWtpSpec extends BootstrapOptions {
   /** Stated maximum willingness to pay, one per respondent, ≥ 0. */
   readonly wtp: readonly number[];
   readonly weights?: readonly number[];
+  /**
+   * Respondents behind each amount (a frequency table of stated amounts; default 1 each); the
+   * weight of an entry is then the total weight of its respondents.
+   */
+  readonly counts?: readonly number[];
   /** Default 0.95. */
   readonly confidenceLevel?: number;
 }
@@ -35,15 +46,20 @@ export interface OpenEndedWtpResult {
 export function analyseOpenEndedWtp(spec: OpenEndedWtpSpec): OpenEndedWtpResult {
   const { wtp } = spec;
   const weights = spec.weights ?? wtp.map(() => 1);
-  validate(wtp, weights);
+  validate(wtp, weights, spec.counts);
   const level = spec.confidenceLevel ?? 0.95;
-  const meanBoot = percentileBootstrap(wtp, weights, weightedMean, level, spec);
-  const medianBoot = percentileBootstrap(wtp, weights, weightedMedian, level, spec);
+  const boot = (statistic: typeof weightedMean) =>
+    spec.counts
+      ? frequencyPercentileBootstrap(wtp, weights, spec.counts, statistic, level, spec)
+      : percentileBootstrap(wtp, weights, statistic, level, spec);
+  const meanBoot = boot(weightedMean);
+  const medianBoot = boot(weightedMedian);
   const strip = ({ stdError, ciLow, ciHigh }: BootstrapInterval) => ({ stdError, ciLow, ciHigh });
-  const curve = empiricalWtpCurve(wtp, weights);
+  const n = spec.counts ? spec.counts.reduce((s, c) => s + c, 0) : wtp.length;
+  const curve = { ...empiricalWtpCurve(wtp, weights), n };
   const prices = [...new Set(wtp)].sort((a, b) => a - b);
   return {
-    n: wtp.length,
+    n,
     meanWtp: { estimate: weightedMean(wtp, weights), ...strip(meanBoot) },
     medianWtp: { estimate: weightedMedian(wtp, weights), ...strip(medianBoot) },
     demandCurve: prices.map((price) => ({ price, share: curve.quantity(price) })),
@@ -52,7 +68,9 @@ export function analyseOpenEndedWtp(spec: OpenEndedWtpSpec): OpenEndedWtpResult 
       'each stated amount is the respondent’s maximum willingness to pay',
       'demand at a price = weighted share with WTP at or above it',
       'median: midpoint of the two middle amounts when the cumulative weight is exactly half',
-      `percentile bootstrap, ${meanBoot.replicates} resamples of respondents, mulberry32 seed ${meanBoot.seed}`,
+      spec.counts
+        ? `percentile bootstrap, ${meanBoot.replicates} resamples of respondents drawn as multinomial counts over the table of stated amounts, seed ${meanBoot.seed}`
+        : `percentile bootstrap, ${meanBoot.replicates} resamples of respondents, mulberry32 seed ${meanBoot.seed}`,
     ],
   };
 }
@@ -63,22 +81,26 @@ export function empiricalWtpCurve(
   weights: readonly number[],
 ): FittedDemandCurve {
   const total = weights.reduce((s, w) => s + w, 0);
-  const max = Math.max(...wtp);
+  const max = largest(wtp);
   return {
     description: 'share with stated WTP at or above the price',
     method: 'open-ended willingness to pay',
     quantityKind: 'share',
     quantity: (price) => wtp.reduce((s, v, i) => s + (v >= price ? weights[i] : 0), 0) / total,
     priceRange: { min: 0, max },
-    observedPriceRange: { min: Math.min(...wtp), max },
+    observedPriceRange: { min: smallest(wtp), max },
     n: wtp.length,
     discrete: true,
     steps: [...new Set(wtp)].sort((a, b) => a - b),
   };
 }
 
-function validate(wtp: readonly number[], weights: readonly number[]): void {
-  if (wtp.length < 2) {
+function validate(
+  wtp: readonly number[],
+  weights: readonly number[],
+  counts: readonly number[] | undefined,
+): void {
+  if ((counts ? counts.reduce((s, c) => s + c, 0) : wtp.length) < 2) {
     throw new EstimationError('too-few-observations', 'need at least two WTP answers', 'wtp');
   }
   if (weights.length !== wtp.length) {

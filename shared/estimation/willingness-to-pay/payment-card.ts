@@ -6,6 +6,7 @@ import {
   normalDistribution,
 } from '../maximum-likelihood/latent-distribution';
 import { summariseWtpModel, wtpModelCurve, type WtpModelSummary } from './wtp-model-summary';
+import { extent } from '../numerics/extent';
 
 /** A payment-card choice: WTP in [lower, upper); upper = Infinity for the open top interval. */
 export interface CardInterval {
@@ -72,13 +73,7 @@ export function analysePaymentCard(
     distribution,
     ...summariseWtpModel(fit, dist, confidenceLevel),
     sigma: 1 / fit.beta,
-    curve: wtpModelCurve(
-      fit,
-      dist,
-      'payment card',
-      { min: Math.min(...ends), max: Math.max(...ends) },
-      data.length,
-    ),
+    curve: wtpModelCurve(fit, dist, 'payment card', extent(ends), data.length),
     assumptions: [
       `WTP has a ${distribution} distribution on the whole real line; a stated lower bound of 0 is taken literally`,
       'each answer means lower ≤ WTP < upper; the top interval is open',
