@@ -1,3 +1,4 @@
+import { smallest } from '../numerics/extent';
 /**
  * A float64 column as integers over one power of two: value[i] = integers[i]·2^exponent,
  * exactly. Every finite double is m·2^e with an integer m of at most 53 bits, so sums of
@@ -47,7 +48,7 @@ export function commonDyadic(columns: readonly ArrayLike<number>[]): {
   exponent: number;
 } {
   const each = columns.map(dyadicColumn);
-  const exponent = Math.min(...each.map((c) => c.exponent));
+  const exponent = smallest(each.map((c) => c.exponent));
   return {
     integers: each.map((c) => c.integers.map((v) => shiftLeft(v, c.exponent - exponent))),
     exponent,

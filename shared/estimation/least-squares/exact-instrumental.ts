@@ -1,3 +1,4 @@
+import { largest } from '../numerics/extent';
 import { commonDyadic } from '../exact/dyadic-column';
 import { exactLinearSolve } from '../exact/exact-linear-solve';
 import { fractionToNumber, Rational } from '../exact/rational';
@@ -64,7 +65,7 @@ export function exactInstrumental(design: RawDesign, names: readonly string[]): 
       .map((row) => row.slice(m).map((value) => roundScaled(-value, -scale, d))),
     sandwich(groups) {
       // T_g = Σ_{i∈g} Wᵢ·Nᵢ·Zᵢ; with H's and the meat's powers of two, V = HᵀM′H/d⁴ exactly.
-      const count = groups ? Math.max(...groups) + 1 : n;
+      const count = groups ? largest(groups) + 1 : n;
       const totals = Array.from({ length: count }, () => new Array<bigint>(m).fill(0n));
       numerators.forEach((value, i) => {
         const score = weightOf(i) * value;

@@ -1,3 +1,4 @@
+import { largest, smallest } from '../numerics/extent';
 import { dyadicColumn, shiftLeft, type DyadicColumn } from '../exact/dyadic-column';
 import { exactLinearSolve } from '../exact/exact-linear-solve';
 import { fractionToNumber, Rational } from '../exact/rational';
@@ -93,7 +94,7 @@ export function exactLeastSquares(design: RawDesign, names: readonly string[]): 
     inverseGram: solved.inverse.map((row) => row.map((value) => fractionToNumber(value, den))),
     sandwich(groups) {
       // Score totals t_ga = Σ_{i∈g} Wᵢ·Nᵢ·X_ia; the true total is t_ga·2^(w + base + e_a)/den.
-      const count = groups ? Math.max(...groups) + 1 : n;
+      const count = groups ? largest(groups) + 1 : n;
       const totals = Array.from({ length: count }, () => new Array<bigint>(k).fill(0n));
       numerators.forEach((value, i) => {
         const score = weightOf(i) * value;
@@ -110,7 +111,7 @@ export function exactLeastSquares(design: RawDesign, names: readonly string[]): 
       );
       for (let a = 0; a < k; a++) for (let b = 0; b < a; b++) meat[a][b] = meat[b][a];
       // V = I·M·Iᵀ/den² with the column exponents folded into I: Ĩ_ac = I_ac·2^(e_c − low).
-      const low = Math.min(...x.map((c) => c.exponent));
+      const low = smallest(x.map((c) => c.exponent));
       const inverse = solved.inverse.map((row) =>
         row.map((value, c) => shiftLeft(value, x[c].exponent - low)),
       );
