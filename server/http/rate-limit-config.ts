@@ -25,6 +25,9 @@ export const rateLimitConfig = {
   SYNC_CONCURRENCY: count(2),
   /** Batches that may wait in one process's line before more are told to come back later. */
   SYNC_QUEUE_LENGTH: count(40),
-  /** How long a batch may wait in line before it is told to come back later. */
-  SYNC_QUEUE_WAIT_MS: count(5000),
+  /**
+   * How long a batch may wait in line before it is told to come back later: briefly, so a sync
+   * call never hangs for seconds (the device's outbox simply tries again after `Retry-After`).
+   */
+  SYNC_QUEUE_WAIT_MS: count(750),
 };

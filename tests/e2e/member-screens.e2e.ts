@@ -32,6 +32,7 @@ interface Setting {
   study: FieldTestStudy;
   person: { id: string; name: string };
   tokenName: string;
+  deviceLabel: string;
 }
 
 /** A member to deactivate, a client's token and an enumerator's device, all fresh. */
@@ -53,6 +54,8 @@ async function setting(): Promise<Setting> {
     .from(users)
     .where(eq(users.email, 'client@tidewater.test'));
   const tokenName = `Tariff workbook ${suffix}`;
+  // The demo enumerator's devices of earlier runs show too: this one has a name of its own.
+  const deviceLabel = `Phone of the lake-shore team ${suffix}`;
   const token = newToken();
   await db.insert(apiTokens).values({
     userId: client.id,
@@ -66,12 +69,12 @@ async function setting(): Promise<Setting> {
     sessionId: `e2e-${randomUUID()}`,
     userId: study.enumeratorId,
     organisationId,
-    label: 'Phone of the lake-shore team',
+    label: deviceLabel,
     lastSyncSent: 5,
     lastSyncAccepted: 5,
     queuedAtLastSync: 7,
   });
-  return { study, person: { id: person.id, name }, tokenName };
+  return { study, person: { id: person.id, name }, tokenName, deviceLabel };
 }
 
 const memberRow = (page: Page, name: string) => page.getByRole('row').filter({ hasText: name });
@@ -148,7 +151,7 @@ describe.each(widths)('member screens on a %s', (label, viewport) => {
     await signIn(page, 'supervisor@tidewater.test');
     await page.goto(appUrl(`/devices/${s.study.studyId}`));
     await page.getByRole('heading', { level: 1, name: /^Devices of Lamp prices/ }).waitFor();
-    const card = page.getByRole('listitem').filter({ hasText: 'Phone of the lake-shore team' });
+    const card = page.getByRole('listitem').filter({ hasText: s.deviceLabel });
     expect((await card.getByTestId('queued').textContent())?.trim()).toBe('7');
     await card.getByRole('button', { name: 'Sign out…' }).click();
     await card.getByText('It reported 7 interviews not yet sent').waitFor();
