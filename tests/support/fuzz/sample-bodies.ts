@@ -33,7 +33,7 @@ export const sampleBodies: Record<string, (context: FuzzContext) => unknown> = {
   'POST /api/studies/:studyId/questionnaires/:questionnaireId/versions/:version/publish': () =>
     undefined,
   'POST /api/studies/:studyId/sampling-points/import': () => ({
-    csv: 'code,name,kind,latitude,longitude,stratum,notes\nK-901,Riverside kiosk,kiosk,-1.2001,36.8002,North,By the bridge',
+    csv: 'point_code,point_name,point_kind,latitude,longitude,stratum,notes\nK-901,Riverside kiosk,kiosk,-1.2001,36.8002,North,By the bridge',
   }),
   'POST /api/studies/:studyId/routes': ({ setup }) => ({
     name: 'Market loop',
