@@ -4,6 +4,7 @@ import { authAccess } from './auth-access';
 import { featureAccess } from './feature-access';
 import { healthAccess } from '../health/health-access';
 import { membersAccess } from '../members/members-access';
+import { decodePathSegment } from '../http/decode-path-segment';
 
 /** Every API route with who may call it. A route missing here is refused, never open. */
 export const accessPolicy: readonly AccessRule[] = [
@@ -15,7 +16,7 @@ export const accessPolicy: readonly AccessRule[] = [
 
 const matchers = accessPolicy.map((rule) => ({
   rule,
-  matches: match(rule.path, { decode: decodeURIComponent }),
+  matches: match(rule.path, { decode: decodePathSegment }),
 }));
 
 /** The rule for one request and the path's parameters, or undefined when no rule covers it. */

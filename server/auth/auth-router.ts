@@ -96,6 +96,18 @@ export function authRouter({ db, identity }: AppDependencies): Router {
         );
       return;
     }
+    if (!who.emailVerified) {
+      req.session.destroy(() => undefined);
+      res
+        .status(403)
+        .send(
+          signInProblemPage(
+            'Confirm your e-mail address first',
+            `The sign-in service has not confirmed that ${who.email} is yours. Confirm the address with the sign-in service (look for its message in your inbox), then sign in again.`,
+          ),
+        );
+      return;
+    }
     const outcome = await resolveSignIn(db, who, invitationToken);
     if (outcome.kind !== 'member') {
       req.session.destroy(() => undefined);

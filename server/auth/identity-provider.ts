@@ -66,6 +66,8 @@ export class IdentityProvider {
       subject: claims.sub,
       email: typeof claims['email'] === 'string' ? claims['email'].toLowerCase() : '',
       name: typeof claims['name'] === 'string' ? claims['name'] : '',
+      // Only the provider's explicit `true` counts: an address nobody confirmed names nobody.
+      emailVerified: claims['email_verified'] === true,
     };
   }
 

@@ -8,6 +8,7 @@ import {
   signInThroughProvider,
   type Visit,
 } from '../support/browserless-sign-in';
+import { unconfirmedAccount } from '../../tools/stack/identity-provider/unconfirmed-account';
 
 // The whole OpenID Connect round trip over HTTP against the running server and local provider.
 const appUrl = process.env['TEST_APP_URL']!;
@@ -57,6 +58,20 @@ describe('signing in through the identity provider', () => {
     expect(page.status).toBe(401);
     expect(page.url.startsWith(`${issuer}/interaction/`)).toBe(true);
     expect(page.body).toContain('That e-mail and password do not match an account.');
+    expect((await apiCall(browser, sessionUrl)).status).toBe(401);
+  });
+
+  it('refuses an address the provider has not confirmed, with a page saying so, and opens no session', async () => {
+    const browser = new BrowserlessBrowser();
+    const page = await signInThroughProvider(
+      browser,
+      appUrl,
+      unconfirmedAccount.email,
+      unconfirmedAccount.password,
+    );
+    expect(page.status).toBe(403);
+    expect(heading(page)).toBe('Confirm your e-mail address first');
+    expect(page.body).toContain(unconfirmedAccount.email);
     expect((await apiCall(browser, sessionUrl)).status).toBe(401);
   });
 

@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { demoPassword, demoPeople } from '../../server/demo/demo-people';
+import { unconfirmedAccount } from './identity-provider/unconfirmed-account';
 import { startIdentityProvider } from './identity-provider/identity-provider';
 import { startMailSink } from './mail-sink/mail-sink';
 import { startObjectStore } from './object-store';
@@ -73,11 +74,10 @@ export async function startLocalStack(
     startObjectStore(dir, ports.objectStore),
   );
   stoppers.push(() => store.stop());
-  const accounts = demoPeople.map((p) => ({
-    email: p.email,
-    name: p.name,
-    password: demoPassword,
-  }));
+  const accounts = [
+    ...demoPeople.map((p) => ({ email: p.email, name: p.name, password: demoPassword })),
+    unconfirmedAccount,
+  ];
   const idp = await step('The identity provider', () =>
     startIdentityProvider({
       dir,

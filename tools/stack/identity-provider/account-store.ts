@@ -6,6 +6,16 @@ export interface Account {
   email: string;
   name: string;
   passwordHash: string;
+  /** Whether the address was confirmed; absent means confirmed (the usual account). */
+  emailVerified?: boolean;
+}
+
+/** An account the provider starts with. */
+export interface SeedAccount {
+  email: string;
+  name: string;
+  password: string;
+  emailVerified?: boolean;
 }
 
 function hashPassword(password: string, salt = randomBytes(16).toString('hex')): string {
@@ -58,8 +68,13 @@ export class AccountStore {
   }
 
   /** Makes sure each seeded account exists (used for the demo organisation's people). */
-  seed(seeds: readonly { email: string; name: string; password: string }[]): void {
-    for (const seedAccount of seeds)
-      this.create(seedAccount.email, seedAccount.name, seedAccount.password);
+  seed(seeds: readonly SeedAccount[]): void {
+    for (const seedAccount of seeds) {
+      const account = this.create(seedAccount.email, seedAccount.name, seedAccount.password);
+      if (account && seedAccount.emailVerified === false) {
+        account.emailVerified = false;
+        writeFileSync(this.file, JSON.stringify(this.accounts, null, 2));
+      }
+    }
   }
 }

@@ -4,7 +4,7 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import type { Server } from 'node:http';
 import { join } from 'node:path';
 import Provider, { type Configuration } from 'oidc-provider';
-import { AccountStore } from './account-store';
+import { AccountStore, type SeedAccount } from './account-store';
 import { interactionRoutes } from './interaction-routes';
 import {
   defaultWrongPasswordLimits,
@@ -18,7 +18,7 @@ export interface IdentityProviderOptions {
   clientId: string;
   clientSecret: string;
   redirectUris: string[];
-  accounts: readonly { email: string; name: string; password: string }[];
+  accounts: readonly SeedAccount[];
   /** Wrong passwords allowed per account and per address in 15 minutes. */
   wrongPasswordLimits?: WrongPasswordLimits;
 }
@@ -88,7 +88,7 @@ export async function startIdentityProvider(
         claims: () => ({
           sub: account.id,
           email: account.email,
-          email_verified: true,
+          email_verified: account.emailVerified !== false,
           name: account.name,
         }),
       };
