@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 
 /** What a column of a brought dataset stands for in a demand model. */
 export const columnRoles = [
@@ -42,7 +43,7 @@ export const storedNameSchema = z
 /** One column of the file and what it becomes. */
 export const columnMappingSchema = z.strictObject({
   /** The header as it stands in the file. */
-  source: z.string().min(1, 'Name the file column').max(200),
+  source: storableText().min(1, 'Name the file column').max(200),
   name: storedNameSchema,
   role: z.enum(columnRoles, { error: 'Choose a role' }),
   type: z.enum(columnTypes, { error: 'Choose number, text or date' }),

@@ -1,10 +1,11 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 import { columnMappingListSchema, columnMappingSchema } from './dataset-columns';
 
 /** Body of POST /api/studies/:studyId/datasets: import a complete upload with a mapping. */
 export const datasetImportSchema = z.strictObject({
   uploadId: z.uuid({ error: 'Choose an uploaded file' }),
-  name: z.string().trim().min(1, 'Name the dataset').max(120, 'At most 120 characters'),
+  name: storableText().trim().min(1, 'Name the dataset').max(120, 'At most 120 characters'),
   columns: columnMappingListSchema,
 });
 export type DatasetImport = z.infer<typeof datasetImportSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText } from '../storable/storable-text';
 
 /** Largest file a dataset may come from, and the most one chunk request may carry. */
 export const maxDatasetBytes = 2 * 1024 ** 3;
@@ -10,8 +11,7 @@ export type DatasetFormat = (typeof datasetFormats)[number];
 
 /** Body of POST /api/studies/:studyId/dataset-uploads: announce a file before its chunks. */
 export const uploadStartSchema = z.strictObject({
-  fileName: z
-    .string()
+  fileName: storableText()
     .min(1, 'Name the file')
     .max(200, 'At most 200 characters')
     .regex(/\.(csv|xlsx)$/i, 'Only CSV (.csv) or Excel workbook (.xlsx) files can be imported'),

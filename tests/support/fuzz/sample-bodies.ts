@@ -70,4 +70,37 @@ export const sampleBodies: Record<string, (context: FuzzContext) => unknown> = {
   }),
   'POST /api/portal/tokens': () => ({ name: 'Pricing dashboard' }),
   'DELETE /api/portal/tokens/:tokenId': () => undefined,
+  'POST /api/studies/:studyId/review/accept': ({ interviewId }) => ({
+    interviewIds: [interviewId],
+  }),
+  'POST /api/members/:userId/deactivate': () => undefined,
+  'POST /api/members/:userId/reactivate': () => undefined,
+  'POST /api/session/sign-out-everywhere': () => ({}),
+  'POST /api/studies/:studyId/devices/:deviceId/sign-out': () => ({}),
+  'DELETE /api/admin/tokens/:tokenId': () => undefined,
+  'POST /api/studies/:studyId/dataset-uploads': () => ({
+    fileName: 'outlet-sales.csv',
+    totalBytes: 2048,
+  }),
+  'PUT /api/studies/:studyId/dataset-uploads/:uploadId': () => ({ bytes: 'price,quantity' }),
+  'POST /api/studies/:studyId/datasets': () => ({
+    uploadId: randomUUID(),
+    name: 'Outlet sales by week',
+    columns: [
+      { source: 'Price', name: 'price', role: 'price', type: 'number' },
+      { source: 'Units', name: 'units', role: 'quantity', type: 'number' },
+    ],
+  }),
+  'DELETE /api/studies/:studyId/datasets/:datasetId': () => undefined,
+  'POST /api/studies/:studyId/datasets/:datasetId/fits': () => ({
+    spec: {
+      form: 'log-log',
+      covariates: [],
+      fixedEffects: [],
+      weighted: false,
+      standardErrors: { type: 'hc1' },
+      instruments: [],
+      confidenceLevel: 0.95,
+    },
+  }),
 };
