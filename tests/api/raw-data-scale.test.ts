@@ -53,7 +53,7 @@ async function downloadCounting(file: 'csv' | 'xlsx') {
   let peak = baseline;
   const sampler = setInterval(() => {
     peak = Math.max(peak, liveHeap());
-  }, 250);
+  }, 1000);
   let bytes = 0;
   let lines = 0;
   try {

@@ -2,12 +2,13 @@ import { freePort } from '../stack/free-port';
 import { startPostgres } from '../stack/postgres-cluster';
 import { stateDir } from '../stack/state-dir';
 import type { BenchContext, BenchPart } from './bench-part';
+import { exportBench } from './export-bench';
 import { fitBench } from './fit-bench';
 import { memoryFitBench } from './memory-fit-bench';
 import { syncBench } from './sync-bench';
 
 /** The parts `npm run bench` runs, in order; `npm run bench -- NAME…` runs only those. */
-const parts: readonly BenchPart[] = [fitBench, memoryFitBench, syncBench];
+const parts: readonly BenchPart[] = [fitBench, memoryFitBench, syncBench, exportBench];
 
 const log = (line: string) => console.log(`[fieldcurve] ${line}`);
 
