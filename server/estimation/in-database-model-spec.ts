@@ -35,6 +35,13 @@ export interface InDatabaseModelSpec {
    * down (default 1e10); such designs are summed in exact numeric instead.
    */
   readonly maxConditionNumber?: number;
+  /**
+   * Write the sums straight over the source's rows (default false). A source on another server
+   * (a postgres_fdw foreign table, or a partition of one) can then compute them there and send
+   * back one row; by default the shifted values are first computed in a fenced subquery, which is
+   * quicker locally but makes a foreign source send every row.
+   */
+  readonly aggregateAtSource?: boolean;
 }
 
 /** A result column as PostgreSQL describes it. */

@@ -32,6 +32,10 @@ export interface ResolvedModel {
   readonly weights: ModelVariable | null;
   readonly cluster: { readonly column: string; readonly value: SQL } | null;
   readonly intercept: boolean;
+  /** Sums over the source's rows directly, so a foreign source computes them itself. */
+  readonly aggregateAtSource: boolean;
+  /** The source table's name as `regclass` reads it (quoted, qualified), or null for a query. */
+  readonly table: string | null;
 }
 
 /**
@@ -60,6 +64,8 @@ export async function resolveModel(
         ? { column: column(se.column, false), value: sql`${sql.identifier(se.column)}` }
         : null,
     intercept: spec.intercept ?? true,
+    aggregateAtSource: spec.aggregateAtSource ?? false,
+    table: 'table' in spec.source ? regclassName(spec.source) : null,
   };
 }
 
@@ -119,4 +125,9 @@ function checkColumn(
     );
   }
   return name;
+}
+
+function regclassName(source: { table: string; schema?: string }): string {
+  const quote = (name: string) => `"${name.replace(/"/g, '""')}"`;
+  return source.schema ? `${quote(source.schema)}.${quote(source.table)}` : quote(source.table);
 }

@@ -4,7 +4,7 @@ import { Rational } from '@shared/estimation/exact/rational';
 import { InputProblem } from './input-problem';
 import type { SqlRunner } from './in-database-model-spec';
 import type { ModelVariable, ResolvedModel } from './model-source';
-import { readSymmetricSums, symmetricSumsSelect } from './symmetric-sums';
+import { readSymmetricSums, symmetricSumsSelect, type SymmetricSums } from './symmetric-sums';
 
 /** Rows read to choose the shifts: enough for a mean within a few percent of an SD. */
 const SHIFT_SAMPLE_ROWS = 1000;
@@ -37,32 +37,68 @@ function modelTerms(model: ResolvedModel): readonly ModelVariable[] {
 export async function momentPass(runner: SqlRunner, model: ResolvedModel): Promise<ShiftedSums> {
   const shifts = await sampleMeans(runner, model);
   const terms = modelTerms(model);
-  const shifted = terms.map(
-    (t, j) => sql`${t.value} - ${shifts[j]}::float8 AS ${sql.raw(`v${j}`)}`,
-  );
-  const refs = terms.map((_, j) => sql.raw(`v${j}`));
+  const shifted = terms.map((t, j) => sql`(${t.value} - ${shifts[j]}::float8)`);
   const weights = model.weights?.value;
-  const variables: SQL[] = weights ? [sql.raw('r'), ...refs.map((v) => sql`r * ${v}`)] : refs;
+  const atSource = model.aggregateAtSource;
+  // At the source every aggregate carries its own expressions (a foreign server can compute
+  // them); otherwise they read the columns of the fenced subquery below.
+  const refs = atSource ? shifted : terms.map((_, j) => sql.raw(`v${j}`));
+  const w = atSource && weights ? sql`(${weights})` : sql.raw('w');
+  const r = atSource && weights ? sql`sqrt(${weights})` : sql.raw('r');
+  const variables: SQL[] = weights ? [r, ...refs.map((v) => sql`${r} * ${v}`)] : refs;
   const weightColumns = weights ? [sql`${weights} AS w`, sql`sqrt(${weights}) AS r`] : [];
   // The paired aggregates skip a row with a NULL; this count finds one. IS NULL tests are
   // evaluated inline, and the count's transition runs only for such a row.
-  const missing = [...refs, ...(weights ? [sql.raw('w')] : [])].map((v) => sql`${v} IS NULL`);
+  const missing = [...refs, ...(weights ? [w] : [])].map((v) => sql`${v} IS NULL`);
   // OFFSET NULL keeps the subquery from being merged into the aggregates (each shifted value is
   // computed once per row, not once per sum) while leaving the scan free to run in parallel.
-  const query = sql`SELECT count(*) AS rows,
+  const columns = [...weightColumns, ...shifted.map((v, j) => sql`${v} AS ${sql.raw(`v${j}`)}`)];
+  const sumsOver = (source: SQL) => sql`SELECT count(*) AS rows,
     count(*) FILTER (WHERE ${sql.join(missing, sql` OR `)}) AS incomplete,
-    ${weights ? sql`min(w) AS wmin, ` : sql``}
+    ${weights ? sql`min(${w}) AS wmin, ` : sql``}
     ${symmetricSumsSelect(variables)}
-    FROM (SELECT ${sql.join([...weightColumns, ...shifted], sql`, `)}
-          FROM ${model.from} OFFSET NULL) AS shifted`;
-  const row = (await runner.execute(query)).rows[0];
-  const n = Number(row['rows']);
-  const sums = readSymmetricSums(row, variables.length, n);
-  if (!sums || Number(row['incomplete']) > 0 || (weights && !(Number(row['wmin']) > 0))) {
-    throw new InputProblem('a NULL, non-finite or non-positive value reached the sums');
+    FROM ${source}`;
+  let n = 0;
+  let total: SymmetricSums | null = null;
+  const sources = atSource
+    ? await leafSources(runner, model)
+    : [sql`(SELECT ${sql.join(columns, sql`, `)} FROM ${model.from} OFFSET NULL) AS shifted`];
+  for (const source of sources) {
+    const row = (await runner.execute(sumsOver(source))).rows[0];
+    const rows = Number(row['rows']);
+    if (rows === 0) continue;
+    const sums = readSymmetricSums(row, variables.length, rows);
+    if (!sums || Number(row['incomplete']) > 0 || (weights && !(Number(row['wmin']) > 0))) {
+      throw new InputProblem('a NULL, non-finite or non-positive value reached the sums');
+    }
+    n += rows;
+    total = total ? addSums(total, sums) : sums;
   }
-  const products = weights ? sums.products : withConstant(n, sums.linear, sums.products);
+  if (!total) throw new InputProblem('the source had no rows when the sums were taken');
+  const products = weights ? total.products : withConstant(n, total.linear, total.products);
   return { n, shifts, products, weighted: weights !== undefined };
+}
+
+/**
+ * The FROM items the sums run over at the source: each leaf partition of a partitioned table on
+ * its own (a partition on another server then computes its own sums, which PostgreSQL does not
+ * push down through the parent), or the source itself. Raw sums add exactly (as rationals).
+ */
+async function leafSources(runner: SqlRunner, model: ResolvedModel): Promise<SQL[]> {
+  if (model.table === null) return [model.from];
+  const leaves = await runner.execute(sql`SELECT relid::regclass::text AS name
+    FROM pg_partition_tree(${model.table}::regclass) WHERE isleaf ORDER BY relid`);
+  // A table that is not partitioned has no partition tree: it is its own one source.
+  if (leaves.rows.length === 0) return [model.from];
+  // regclass output is the catalog's own quoted, qualified name: safe to splice.
+  return leaves.rows.map((row) => sql`${sql.raw(String(row['name']))} AS src`);
+}
+
+function addSums(a: SymmetricSums, b: SymmetricSums): SymmetricSums {
+  return {
+    linear: a.linear.map((v, i) => v.add(b.linear[i])),
+    products: a.products.map((row, i) => row.map((v, j) => v.add(b.products[i][j]))),
+  };
 }
 
 async function sampleMeans(runner: SqlRunner, model: ResolvedModel): Promise<number[]> {

@@ -2,6 +2,7 @@ import { freePort } from '../stack/free-port';
 import { startPostgres } from '../stack/postgres-cluster';
 import { stateDir } from '../stack/state-dir';
 import type { BenchContext, BenchPart } from './bench-part';
+import { exportBench } from './export-bench';
 import { fitBench } from './fit-bench';
 import { memoryFitBench } from './memory-fit-bench';
 import { statedFitBench } from './stated-fit-bench';
@@ -17,6 +18,7 @@ const parts: readonly BenchPart[] = [
   syncLoadBench,
   datasetBench,
   statedFitBench,
+  exportBench,
 ];
 
 const log = (line: string) => console.log(`[fieldcurve] ${line}`);

@@ -49,7 +49,8 @@ export function pathParameter(name: string, context: FuzzContext): string {
     questionnaireId: context.questionnaireId,
     version: String(context.draftVersion),
     routeId: setup.routeId,
-    userId: setup.organisation.people.enumerator.userId,
+    // A member the fuzz agents do not sign in as: deactivating them leaves every route reachable.
+    userId: setup.secondEnumerator.userId,
     interviewId: context.interviewId,
   };
   return values[name] ?? randomUUID(); // ids of things made per call (tokens, photos …)
