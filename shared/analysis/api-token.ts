@@ -43,7 +43,15 @@ export type IssuedApiToken = z.infer<typeof issuedApiTokenSchema>;
 
 /** The body of POST /api/portal/tokens. */
 export const issueApiTokenRequestSchema = z.strictObject({
-  name: storableText().trim().min(1, 'Name the token (e.g. the tool that uses it)').max(100),
+  // One line of printable text: control characters would garble every list that shows it.
+  name: storableText()
+    .trim()
+    .min(1, 'Name the token (e.g. the tool that uses it)')
+    .max(100, 'Keep the name to 100 characters')
+    .refine(
+      (text) => ![...text].some((c) => c.charCodeAt(0) < 0x20 || c.charCodeAt(0) === 0x7f),
+      'The name cannot contain control characters',
+    ),
   expiresInDays: z
     .number({ error: 'Give the lifetime in days' })
     .int('Give the lifetime in whole days')
