@@ -6,7 +6,9 @@ import type { Database } from '../../../server/db/database';
  * keeps the count steady while other test files write theirs in parallel. A table missing here
  * fails the fuzzer (`uncountedTables`), so a new table is counted too.
  */
-const orgStudies = 'select id from studies where organisation_id = $1';
+// The organisation's studies come as an array ($2): `study_id = any($2)` is an index scan on
+// each table, where a subquery lets the planner scan whole tables that other test files have
+// filled with hundreds of thousands of rows (a fuzz run counts thousands of times).
 const scopes: Record<string, string> = {
   organisations: 'id = $1',
   users: 'id in (select user_id from memberships where organisation_id = $1)',
@@ -14,29 +16,29 @@ const scopes: Record<string, string> = {
   invitations: 'organisation_id = $1',
   api_tokens: 'organisation_id = $1',
   studies: 'organisation_id = $1',
-  study_members: `study_id in (${orgStudies})`,
-  questionnaires: `study_id in (${orgStudies})`,
-  questionnaire_versions: `questionnaire_id in (select id from questionnaires where study_id in (${orgStudies}))`,
-  sampling_points: `study_id in (${orgStudies})`,
-  routes: `study_id in (${orgStudies})`,
-  route_stops: `study_id in (${orgStudies})`,
-  interviews: `study_id in (${orgStudies})`,
-  interview_photos: `interview_id in (select id from interviews where study_id in (${orgStudies}))`,
-  photo_upload_chunks: `photo_id in (select p.id from interview_photos p join interviews i on i.id = p.interview_id where i.study_id in (${orgStudies}))`,
-  fits: `study_id in (${orgStudies})`,
-  schedule_versions: `study_id in (${orgStudies})`,
+  study_members: `study_id = any($2::uuid[])`,
+  questionnaires: `study_id = any($2::uuid[])`,
+  questionnaire_versions: `questionnaire_id in (select id from questionnaires where study_id = any($2::uuid[]))`,
+  sampling_points: `study_id = any($2::uuid[])`,
+  routes: `study_id = any($2::uuid[])`,
+  route_stops: `study_id = any($2::uuid[])`,
+  interviews: `study_id = any($2::uuid[])`,
+  interview_photos: `interview_id in (select id from interviews where study_id = any($2::uuid[]))`,
+  photo_upload_chunks: `photo_id in (select p.id from interview_photos p join interviews i on i.id = p.interview_id where i.study_id = any($2::uuid[]))`,
+  fits: `study_id = any($2::uuid[])`,
+  schedule_versions: `study_id = any($2::uuid[])`,
   field_devices: 'organisation_id = $1',
-  dataset_uploads: `study_id in (${orgStudies})`,
-  dataset_upload_chunks: `upload_id in (select id from dataset_uploads where study_id in (${orgStudies}))`,
-  datasets: `study_id in (${orgStudies})`,
-  dataset_fits: `study_id in (${orgStudies})`,
-  shelf_observation_rows: `study_id in (${orgStudies})`,
-  stated_interviews: `study_id in (${orgStudies})`,
-  stated_ladder_steps: `study_id in (${orgStudies})`,
-  stated_thresholds: `study_id in (${orgStudies})`,
-  stated_wtp_amounts: `study_id in (${orgStudies})`,
-  stated_card_intervals: `study_id in (${orgStudies})`,
-  stated_bid_answers: `study_id in (${orgStudies})`,
+  dataset_uploads: `study_id = any($2::uuid[])`,
+  dataset_upload_chunks: `upload_id in (select id from dataset_uploads where study_id = any($2::uuid[]))`,
+  datasets: `study_id = any($2::uuid[])`,
+  dataset_fits: `study_id = any($2::uuid[])`,
+  shelf_observation_rows: `study_id = any($2::uuid[])`,
+  stated_interviews: `study_id = any($2::uuid[])`,
+  stated_ladder_steps: `study_id = any($2::uuid[])`,
+  stated_thresholds: `study_id = any($2::uuid[])`,
+  stated_wtp_amounts: `study_id = any($2::uuid[])`,
+  stated_card_intervals: `study_id = any($2::uuid[])`,
+  stated_bid_answers: `study_id = any($2::uuid[])`,
 };
 // Sign-in sessions belong to no organisation and change with every sign-in; rate-limit
 // counters change with every call, refused or not, by design.
@@ -60,8 +62,14 @@ export async function organisationRowCounts(
   const select = Object.entries(scopes)
     .map(([table, where]) => `(select count(*) from ${table} where ${where})::int as ${table}`)
     .join(', ');
+  const studies = await db.$client.query<{ id: string }>(
+    'select id from studies where organisation_id = $1',
+    [organisationId],
+  );
+  const studyIds = studies.rows.map((row) => row.id);
   const result = await db.$client.query<Record<string, number>>(`select ${select}`, [
     organisationId,
+    studyIds,
   ]);
   return result.rows[0] ?? {};
 }
