@@ -36,7 +36,7 @@ const photoEvery = 10;
 const serverKills = 4;
 const seed = Number(process.env['CHAOS_SYNC_SEED'] ?? Date.now() % 2 ** 31);
 /** Long enough for the larger run on a busy two-core machine; the small one needs far less. */
-const budgetMs = Math.max(150_000, interviewCount * 500);
+const budgetMs = Math.max(300_000, interviewCount * 600);
 
 /** mulberry32: a small seeded generator, so a failing run's choices can be repeated. */
 function seededRandom(start: number): () => number {
