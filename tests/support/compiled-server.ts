@@ -11,12 +11,13 @@ export interface RunningServer {
 /**
  * The compiled server as a process of its own (no wrapper, so a signal sent to `child` reaches
  * it) on a free port, with the test stack's environment plus `env`; answers once it serves
- * /api/health.
+ * /api/health. A given `port` restarts a server where it was, so its clients find it again.
  */
 export async function startCompiledServer(
   env: Record<string, string> = {},
+  port?: number,
 ): Promise<RunningServer> {
-  const port = await freePort();
+  port ??= await freePort();
   const url = `http://127.0.0.1:${port}`;
   const [command, args] = await serverCommand('main');
   const child = spawn(command, args, {
