@@ -2,6 +2,7 @@ import { EstimationError } from '../estimation-error';
 import type { TieRule } from './curve-crossing';
 import type { ThresholdAnswer } from './threshold-answers';
 import { largest } from '../numerics/extent';
+import { sweepTrialSums, type TrialKnots } from './trial-sweep';
 
 /** Purchase probability for each stated likelihood 1–5. */
 export type LikelihoodCalibration = Readonly<Record<1 | 2 | 3 | 4 | 5, number>>;
@@ -51,9 +52,30 @@ export function buildTrialCurve(
   const prices = [
     ...new Set(answers.flatMap((a) => [a.tooCheap, a.cheap, a.expensive, a.tooExpensive])),
   ].sort((x, y) => x - y);
+  const position = new Map(prices.map((p, j) => [p, j]));
   const total = answers.reduce((s, a) => s + (a.weight ?? 1), 0);
+  // Ordered knots (every answer, unless out-of-order ones are kept) go through one sweep of
+  // the grid; out-of-order ones are evaluated price by price as before.
+  const ordered: TrialKnots[] = [];
+  const unordered: number[] = [];
+  knots.forEach((k, i) => {
+    if (!(k[0][0] <= k[1][0] && k[1][0] <= k[2][0] && k[2][0] <= k[3][0])) {
+      unordered.push(i);
+      return;
+    }
+    const at = k.map(([x]) => position.get(x)!) as unknown as TrialKnots['at'];
+    ordered.push({
+      weight: answers[i].weight ?? 1,
+      at,
+      likelihoodCheap: k[1][1],
+      likelihoodExpensive: k[2][1],
+    });
+  });
+  const sums = sweepTrialSums(prices, ordered);
   const trial = prices.map(
-    (p) => knots.reduce((s, k, i) => s + (answers[i].weight ?? 1) * evaluate(k, p), 0) / total,
+    (p, j) =>
+      unordered.reduce((s, i) => s + (answers[i].weight ?? 1) * evaluate(knots[i], p), sums[j]) /
+      total,
   );
   const revenue = prices.map((p, i) => p * trial[i]);
   return {
