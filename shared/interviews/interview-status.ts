@@ -10,3 +10,12 @@ export const interviewStatuses = [
   'rejected',
 ] as const;
 export type InterviewStatus = (typeof interviewStatuses)[number];
+
+/** How each review state is named on screen. */
+export const interviewStatusLabels: Readonly<Record<InterviewStatus, string>> = {
+  received: 'Received',
+  flagged: 'Flagged',
+  accepted: 'Accepted',
+  returned: 'Returned',
+  rejected: 'Rejected',
+};

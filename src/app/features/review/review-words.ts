@@ -1,16 +1,9 @@
 import type { QualityFlag } from '@shared/field-sync/quality/quality-flag';
 import { qualityFlagLabels } from '@shared/field-sync/quality/quality-flag';
-import type { InterviewStatus } from '@shared/interviews/interview-status';
 import type { Block } from '@shared/questionnaire/block';
 import { thresholdNames } from './threshold-names';
 
-export const statusLabels: Readonly<Record<InterviewStatus, string>> = {
-  received: 'Received',
-  flagged: 'Flagged',
-  accepted: 'Accepted',
-  returned: 'Returned',
-  rejected: 'Rejected',
-};
+export { interviewStatusLabels as statusLabels } from '@shared/interviews/interview-status';
 
 /**
  * A flag's label with the figure that raised it, as the supervisor reads it. With the

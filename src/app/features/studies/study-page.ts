@@ -19,11 +19,15 @@ import { PriceRange } from './price-range';
 import { StudiesApi } from './studies-api';
 import { StudyMembersCard } from './study-members-card';
 import { StudyQuestionnairesCard } from './study-questionnaires-card';
+import { StudyRawDataCard } from './study-raw-data-card';
 import { StudyStatusChip } from './study-status-chip';
 
 const statusActions = { in_field: 'Send into the field', closed: 'Close the study' } as const;
 
-/** One study: what it prices, its status, who works on it and its questionnaires. */
+/**
+ * One study: what it prices, its status, who works on it, its questionnaires and, for
+ * researchers and supervisors, its raw data.
+ */
 @Component({
   selector: 'app-study-page',
   imports: [
@@ -35,6 +39,7 @@ const statusActions = { in_field: 'Send into the field', closed: 'Close the stud
     RouterLink,
     StudyMembersCard,
     StudyQuestionnairesCard,
+    StudyRawDataCard,
     StudyStatusChip,
   ],
   templateUrl: './study-page.html',
