@@ -23,7 +23,7 @@ export async function signIn(page: Page, email: string, password = demoPassword)
 /** Signs out through the account menu and waits for the signed-out landing page. */
 export async function signOut(page: Page): Promise<void> {
   await page.getByRole('button', { name: /^Account of / }).click();
-  await page.getByRole('menuitem', { name: 'Sign out' }).click();
+  await page.getByRole('menuitem', { name: 'Sign out', exact: true }).click();
   await page.getByRole('link', { name: 'Sign in' }).waitFor();
 }
 

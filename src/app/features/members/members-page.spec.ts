@@ -12,6 +12,7 @@ const members: Member[] = [
     email: 'tomas@example.org',
     roles: ['admin', 'researcher'],
     joinedAt: '2026-03-04T09:00:00.000Z',
+    deactivatedAt: null,
   },
   {
     userId: '5c7d8e9f-0a1b-4c2d-8e3f-4a5b6c7d8e9f',
@@ -19,6 +20,7 @@ const members: Member[] = [
     email: 'amara@example.org',
     roles: ['enumerator'],
     joinedAt: '2026-05-18T14:30:00.000Z',
+    deactivatedAt: null,
   },
 ];
 

@@ -11,6 +11,7 @@ const member: Member = {
   email: 'kofi@example.org',
   roles: ['supervisor'],
   joinedAt: '2026-02-01T08:00:00.000Z',
+  deactivatedAt: null,
 };
 
 describe('RoleDialog', () => {
