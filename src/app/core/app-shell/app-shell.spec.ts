@@ -28,7 +28,9 @@ describe('AppShell', () => {
   it('shows an administrator the administration pages', async () => {
     expect(await navLinks(['admin'])).toEqual([
       'Home /',
+      'Devices /devices',
       'Members /members',
+      'Access tokens /members/tokens',
       'System health /system-health',
     ]);
   });

@@ -106,8 +106,8 @@ describe('HomePage', () => {
       fetchedAt: '2026-12-01T08:00:00Z',
     });
     const fixture = TestBed.createComponent(HomePage);
-    // The device's store answers asynchronously; a busy machine may take a few seconds.
-    const deadline = Date.now() + 5000;
+    // The store and its lazily loaded code answer asynchronously; a busy machine may take a while.
+    const deadline = Date.now() + 20_000;
     while (Date.now() < deadline && !fixture.nativeElement.textContent.includes('routes are')) {
       await new Promise((resolve) => setTimeout(resolve, 20));
       await fixture.whenStable();
@@ -116,7 +116,7 @@ describe('HomePage', () => {
       '4 routes are on this device.',
     );
     await TestBed.inject(FieldStore).db.delete();
-  });
+  }, 30_000);
 
   it('leaves a figure out when its list cannot be fetched, e.g. offline', async () => {
     const { page, http, settle } = await render(['researcher']);

@@ -1,4 +1,5 @@
 import { provideHttpClient } from '@angular/common/http';
+import { provideRouter } from '@angular/router';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import type { Invitation } from '@shared/members/invitation';
@@ -42,7 +43,7 @@ describe('MembersPage', () => {
   beforeEach(() => {
     TestBed.configureTestingModule({
       imports: [MembersPage],
-      providers: [provideHttpClient(), provideHttpClientTesting()],
+      providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([])],
     });
     server = TestBed.inject(HttpTestingController);
   });
