@@ -8,7 +8,7 @@ import { interviews, routes, samplingPoints, users } from '../db/schema';
 const ofStudy = (studyId: string, column: AnyPgColumn) =>
   sql`(select distinct ${column} from ${interviews} where ${interviews.studyId} = ${studyId})`;
 
-/** The people, routes and points that occur among a study's interviews, by name. */
+/** The people and routes that occur among a study's interviews, and the study's points, by name. */
 export async function reviewFacets(db: Executor, studyId: string): Promise<ReviewFacets> {
   const [enumerators, routeRows, points] = await Promise.all([
     db
