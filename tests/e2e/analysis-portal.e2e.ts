@@ -243,7 +243,9 @@ describe('the client’s portal', () => {
     expect(((await open.json()) as unknown[]).length).toBeGreaterThan(0);
 
     await page.getByRole('button', { name: 'Revoke the token Price planner workbook' }).click();
-    await page.getByText(/revoked \d/).waitFor();
+    const revoked = page.getByRole('listitem').filter({ hasText: 'Price planner workbook' });
+    await revoked.getByText(/revoked by its owner/).waitFor();
+    expect(await revoked.innerText()).toMatch(/revoked by its owner \d+ \w+ \d{4}, \d\d:\d\d/);
     expect((await readApi()).status).toBe(401);
   });
 });

@@ -56,7 +56,7 @@ describe('a researcher’s own sales data', () => {
       .getByRole('link', { name: 'Studies' })
       .click();
     await page.getByRole('link', { name: lanternStudy.name }).first().click();
-    await page.getByRole('link', { name: 'Data' }).click();
+    await page.getByRole('link', { name: 'Data', exact: true }).click();
     await page.getByRole('heading', { level: 1, name: 'Study data' }).waitFor();
   });
 
